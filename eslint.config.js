@@ -1,0 +1,34 @@
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import vue from 'eslint-plugin-vue';
+
+export default tseslint.config(
+  { ignores: ['node_modules/', 'dist/', 'dist-electron/', 'release/', 'artifacts/', 'coverage/'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  ...vue.configs['flat/recommended'],
+  {
+    files: ['**/*.vue'],
+    languageOptions: { parserOptions: { parser: tseslint.parser } },
+  },
+  {
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      'vue/multi-word-component-names': 'off',
+      'vue/max-attributes-per-line': 'off',
+      'vue/singleline-html-element-content-newline': 'off',
+      'vue/html-self-closing': 'off',
+    },
+  },
+  {
+    // core/ is pure: no Node, DOM, Electron or UI imports (DESIGN.md section 2).
+    files: ['core/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: ['node:*', 'fs', 'path', 'os', 'electron', 'vue', 'chart.js', '../renderer/*', '../electron/*'] },
+      ],
+      'no-restricted-globals': ['error', 'window', 'document', 'process', 'Date', 'localStorage'],
+    },
+  },
+);
