@@ -1,0 +1,276 @@
+/**
+ * The Legwise plan: aircraft + environment + reserve policy + ordered legs.
+ * This zod schema is the single source of the plan's TypeScript types and of the
+ * plan-file format (format tag `legwise-plan`, integer schema version). Every
+ * quantity carries its unit in its key (`_m`, `_kg`, `_m_s`, `_J` ...), always SI.
+ * Limits here refuse only the impossible or the outside of the models; values that
+ * are merely unusual get warnings from `sanity.ts`.
+ */
+import { z } from 'zod';
+
+export const PLAN_FORMAT = 'legwise-plan';
+export const PLAN_SCHEMA_VERSION = 1;
+
+/** A finite number in [min, max] (or (min, max] with `openMin`), unit named in the message. */
+function bounded(min: number, max: number, unit = '', openMin = false) {
+  const u = unit ? ` ${unit}` : '';
+  const range = `${openMin ? 'above' : 'from'} ${min} to ${max}${u}`;
+  return z
+    .number({ error: `must be a finite number${u}` })
+    .refine((v) => (openMin ? v > min : v >= min) && v <= max, { error: `must be ${range}` });
+}
+
+const fraction = (min = 0, max = 1, openMin = false) => bounded(min, max, '', openMin);
+const angle_deg = () => bounded(0, 360, 'deg');
+
+export const WindSchema = z.object({
+  speed_m_s: bounded(0, 100, 'm/s'),
+  /** Direction the wind blows FROM, degrees true (meteorological convention, common practice). */
+  from_deg: angle_deg(),
+});
+
+export const PolarSchema = z.object({
+  CD0: bounded(0.003, 0.3, '', true),
+  /** Induced-drag factor k either from Oswald efficiency and aspect ratio (k = 1/(π·e·AR)) or given. */
+  induced: z.discriminatedUnion('by', [
+    z.object({ by: z.literal('geometry'), e: fraction(0, 1, true), AR: bounded(1, 60) }),
+    z.object({ by: z.literal('factor'), k: bounded(0.001, 1, '', true) }),
+  ]),
+  /** Lift coefficient of minimum drag (0 for a symmetric polar). */
+  CLminD: bounded(-0.5, 1),
+  CLmax: bounded(0.3, 4),
+  CLmaxFlaps: bounded(0.3, 5).optional(),
+});
+
+export const FuelKindSchema = z.enum(['avgas', 'mogas', 'jetA', 'jetA1', 'diesel']);
+
+export const FuelSchema = z.object({
+  kind: FuelKindSchema,
+  /** Overrides the typical density of the fuel kind. */
+  density_kg_L: bounded(0.5, 1.1, 'kg/L').optional(),
+  load_kg: bounded(0, 200_000, 'kg'),
+  tankCapacity_L: bounded(0, 300_000, 'L', true),
+});
+
+export const JetSchema = z.object({
+  type: z.literal('jet'),
+  /** Total maximum thrust at sea level, ISA. */
+  maxThrustSL_N: bounded(0, 2_000_000, 'N', true),
+  /** T_max = T_SL · σ^n (common practice, n ≈ 0.7–1). */
+  thrustLapseExponent: bounded(0, 2),
+  /** Thrust-specific fuel consumption, kg/(N·s). */
+  tsfc_kg_Ns: bounded(0, 1e-3, 'kg/(N·s)', true),
+  /** Fuel flow at idle as a fraction of the flow at maximum thrust (descent, glide). */
+  idleFuelFraction: fraction(0, 0.5),
+  fuel: FuelSchema,
+});
+
+export const PropellerSchema = z.object({
+  type: z.literal('propeller'),
+  engine: z.enum(['piston', 'turboprop']),
+  /** Total maximum shaft power at sea level, ISA. */
+  maxPowerSL_W: bounded(0, 20_000_000, 'W', true),
+  /** Power lapse with density: Gagg–Ferrar (normally aspirated piston) or σ^n. */
+  lapse: z.discriminatedUnion('model', [
+    z.object({ model: z.literal('gaggFerrar') }),
+    z.object({ model: z.literal('densityPower'), exponent: bounded(0, 2) }),
+  ]),
+  /** Full power is held up to this pressure altitude (turbo/supercharged); 0 for none. */
+  criticalAltitude_m: bounded(0, 15_000, 'm'),
+  propEfficiency: fraction(0.2, 0.95),
+  /** Brake-specific fuel consumption, kg/J. */
+  bsfc_kg_J: bounded(0, 1e-6, 'kg/J', true),
+  /** Shaft power at idle as a fraction of maximum (descent, glide). */
+  idlePowerFraction: fraction(0, 0.5),
+  fuel: FuelSchema,
+});
+
+export const BatterySchema = z.object({
+  /** Nominal pack energy. */
+  energy_J: bounded(0, 1e11, 'J', true),
+  mass_kg: bounded(0, 50_000, 'kg', true),
+  /** Fraction of the nominal energy that may be drawn (the rest protects the cells). */
+  usableFraction: fraction(0.3, 1),
+  /** Peukert exponent n ≥ 1 (1 = ideal); Traub 2011. */
+  peukertExponent: bounded(1, 1.6),
+  /** Discharge time at which the rated capacity is specified (Rt in Traub 2011). */
+  ratedDischargeTime_s: bounded(60, 100 * 3600, 's'),
+});
+
+export const ElectricSchema = z.object({
+  type: z.literal('electric'),
+  /** Maximum continuous motor shaft power (no density lapse). */
+  maxShaftPower_W: bounded(0, 10_000_000, 'W', true),
+  motorEfficiency: fraction(0.3, 1),
+  controllerEfficiency: fraction(0.3, 1),
+  propEfficiency: fraction(0.2, 0.95),
+  battery: BatterySchema,
+});
+
+export const PowerplantSchema = z.discriminatedUnion('type', [JetSchema, PropellerSchema, ElectricSchema]);
+
+export const AircraftSchema = z.object({
+  name: z.string().min(1).max(120),
+  wingArea_m2: bounded(0.01, 1000, 'm²'),
+  polar: PolarSchema,
+  mass: z.object({
+    /** Empty mass: everything but payload, fuel and (electric) battery pack. */
+    empty_kg: bounded(0.01, 500_000, 'kg'),
+    payload_kg: bounded(0, 200_000, 'kg'),
+    mtow_kg: bounded(0.01, 600_000, 'kg'),
+  }),
+  /** Absolute operating ceiling the operator may not exceed (approved or chosen limit). */
+  ceiling_m: bounded(0, 20_000, 'm'),
+  powerplant: PowerplantSchema,
+});
+
+export const EnvironmentSchema = z.object({
+  /** Temperature offset from ISA, applied at every pressure altitude. */
+  isaOffset_K: bounded(-60, 50, 'K'),
+  /** Altimeter setting; leg altitudes are altitudes above mean sea level with this QNH. */
+  qnh_Pa: bounded(87_000, 108_500, 'Pa'),
+  departureElevation_m: bounded(-400, 5_000, 'm'),
+  arrivalElevation_m: bounded(-400, 5_000, 'm'),
+});
+
+export const ReservePolicySchema = z.object({
+  /** Time to hold at best-endurance speed at the hold altitude (final reserve). */
+  holdTime_s: bounded(0, 6 * 3600, 's'),
+  holdAltitude_m: bounded(-400, 15_000, 'm'),
+  /** Contingency as a fraction of trip fuel or energy. */
+  contingencyFraction: fraction(0, 0.5),
+  /** Distance to an alternate, flown at best range at the alternate altitude. */
+  alternateDistance_m: bounded(0, 5_000_000, 'm'),
+  alternateAltitude_m: bounded(-400, 15_000, 'm'),
+  /** Electric: state of charge (of usable energy) never to be crossed in flight. */
+  socFloor: fraction(0, 0.9),
+});
+
+export const SettingsSchema = z.object({
+  /** Minimum ratio of airspeed to stall speed (1.2 common practice). */
+  stallFactor: bounded(1, 2),
+  /** A check whose relative margin is below this is reported as tight. */
+  tightMargin: fraction(0, 0.5),
+  /** Rate of climb that defines the service ceiling (0.5 m/s common practice). */
+  minClimbRate_m_s: bounded(0, 10, 'm/s'),
+});
+
+/** A fixed airspeed: TAS, EAS or CAS in m/s, or a Mach number. */
+const FixedSpeed = [
+  z.object({ kind: z.literal('tas'), speed_m_s: bounded(0, 400, 'm/s', true) }),
+  z.object({ kind: z.literal('eas'), speed_m_s: bounded(0, 400, 'm/s', true) }),
+  z.object({ kind: z.literal('cas'), speed_m_s: bounded(0, 400, 'm/s', true) }),
+  z.object({ kind: z.literal('mach'), mach: bounded(0, 0.95, '', true) }),
+] as const;
+export const FixedSpeedSchema = z.discriminatedUnion('kind', [...FixedSpeed]);
+
+const Allowance = z.discriminatedUnion('by', [
+  z.object({ by: z.literal('fuel'), fuel_kg: bounded(0, 10_000, 'kg') }),
+  z.object({ by: z.literal('energy'), energy_J: bounded(0, 1e10, 'J') }),
+  z.object({ by: z.literal('massFraction'), fraction: fraction(0, 0.2) }),
+  z.object({ by: z.literal('time'), time_s: bounded(0, 3600, 's') }),
+]);
+
+const legBase = {
+  /** Stable identity for editing and reordering; not used by the physics. */
+  id: z.string().min(1).max(64),
+  label: z.string().max(120).default(''),
+};
+const track = { course_deg: angle_deg(), wind: WindSchema };
+
+export const TakeoffLegSchema = z.object({ kind: z.literal('takeoff'), ...legBase, allowance: Allowance });
+export const LandingLegSchema = z.object({ kind: z.literal('landing'), ...legBase, allowance: Allowance });
+
+export const ClimbLegSchema = z.object({
+  kind: z.literal('climb'),
+  ...legBase,
+  ...track,
+  toAltitude_m: bounded(-400, 20_000, 'm'),
+  speed: z.discriminatedUnion('kind', [z.object({ kind: z.literal('bestRate') }), ...FixedSpeed]),
+  /** Fraction of maximum power or thrust used in the climb. */
+  throttle: fraction(0.05, 1, false),
+});
+
+export const CruiseLegSchema = z.object({
+  kind: z.literal('cruise'),
+  ...legBase,
+  ...track,
+  end: z.discriminatedUnion('by', [
+    z.object({ by: z.literal('distance'), distance_m: bounded(0, 20_000_000, 'm', true) }),
+    z.object({ by: z.literal('fuel'), fuel_kg: bounded(0, 200_000, 'kg', true) }),
+    z.object({ by: z.literal('energy'), energy_J: bounded(0, 1e11, 'J', true) }),
+  ]),
+  /** Fixed airspeed, or best range in this leg's wind. */
+  speed: z.discriminatedUnion('kind', [z.object({ kind: z.literal('bestRange') }), ...FixedSpeed]),
+  /** Constant altitude, or cruise-climb (constant CL and TAS, altitude rises as weight falls). */
+  program: z.enum(['constantAltitude', 'cruiseClimb']),
+});
+
+export const LoiterLegSchema = z.object({
+  kind: z.literal('loiter'),
+  ...legBase,
+  ...track,
+  end: z.discriminatedUnion('by', [
+    z.object({ by: z.literal('time'), time_s: bounded(0, 200 * 3600, 's', true) }),
+    /** As long as the rest of the plan and the reserve policy still allow. */
+    z.object({ by: z.literal('reserve') }),
+  ]),
+  speed: z.discriminatedUnion('kind', [z.object({ kind: z.literal('bestEndurance') }), ...FixedSpeed]),
+});
+
+export const DescentLegSchema = z.object({
+  kind: z.literal('descent'),
+  ...legBase,
+  ...track,
+  toAltitude_m: bounded(-400, 20_000, 'm'),
+  mode: z.discriminatedUnion('by', [
+    z.object({ by: z.literal('rate'), rate_m_s: bounded(0, 50, 'm/s', true), speed: FixedSpeedSchema }),
+    /** Power at idle, best-glide speed ((L/D)max). */
+    z.object({ by: z.literal('glide') }),
+  ]),
+});
+
+export const LegSchema = z.discriminatedUnion('kind', [
+  TakeoffLegSchema,
+  ClimbLegSchema,
+  CruiseLegSchema,
+  LoiterLegSchema,
+  DescentLegSchema,
+  LandingLegSchema,
+]);
+
+export const PlanSchema = z.object({
+  format: z.literal(PLAN_FORMAT),
+  schemaVersion: z.literal(PLAN_SCHEMA_VERSION),
+  name: z.string().min(1).max(120),
+  notes: z.string().max(20_000).default(''),
+  aircraft: AircraftSchema,
+  environment: EnvironmentSchema,
+  reserves: ReservePolicySchema,
+  settings: SettingsSchema,
+  legs: z.array(LegSchema).min(1).max(200),
+});
+
+export type Plan = z.infer<typeof PlanSchema>;
+export type Aircraft = z.infer<typeof AircraftSchema>;
+export type Polar = z.infer<typeof PolarSchema>;
+export type Powerplant = z.infer<typeof PowerplantSchema>;
+export type JetPowerplant = z.infer<typeof JetSchema>;
+export type PropellerPowerplant = z.infer<typeof PropellerSchema>;
+export type ElectricPowerplant = z.infer<typeof ElectricSchema>;
+export type Battery = z.infer<typeof BatterySchema>;
+export type Fuel = z.infer<typeof FuelSchema>;
+export type Environment = z.infer<typeof EnvironmentSchema>;
+export type ReservePolicy = z.infer<typeof ReservePolicySchema>;
+export type Settings = z.infer<typeof SettingsSchema>;
+export type Wind = z.infer<typeof WindSchema>;
+export type FixedSpeed = z.infer<typeof FixedSpeedSchema>;
+export type Leg = z.infer<typeof LegSchema>;
+export type LegKind = Leg['kind'];
+export type TakeoffLeg = z.infer<typeof TakeoffLegSchema>;
+export type LandingLeg = z.infer<typeof LandingLegSchema>;
+export type ClimbLeg = z.infer<typeof ClimbLegSchema>;
+export type CruiseLeg = z.infer<typeof CruiseLegSchema>;
+export type LoiterLeg = z.infer<typeof LoiterLegSchema>;
+export type DescentLeg = z.infer<typeof DescentLegSchema>;
+export type Allowance = z.infer<typeof Allowance>;

@@ -1,0 +1,126 @@
+/**
+ * What the mission solver returns: plain data for screens, files and the CLI.
+ * All quantities SI. Nothing here is ever NaN or Infinity; a leg that cannot be
+ * flown carries `error` and the legs after it are reported as not reached.
+ */
+import type { LegKind } from '../plan/schema.ts';
+
+export type CheckState = 'ok' | 'tight' | 'fails';
+export type Consumable = 'fuel' | 'battery';
+
+/** The aircraft's state at a point along the mission. */
+export interface FlightState {
+  t_s: number;
+  /** Ground distance from the start of the mission. */
+  x_m: number;
+  /** Altitude above mean sea level. */
+  h_m: number;
+  mass_kg: number;
+  /** Fuel on board (0 for electric). */
+  fuel_kg: number;
+  /** Usable battery energy left (0 for fuel burners). */
+  energy_J: number;
+}
+
+/** Samples along a leg for charts; arrays of equal length, first = leg start, last = leg end. */
+export interface LegSeries {
+  t_s: number[];
+  x_m: number[];
+  h_m: number[];
+  mass_kg: number[];
+  fuel_kg: number[];
+  energy_J: number[];
+  tas_m_s: number[];
+}
+
+export interface Span {
+  min: number;
+  max: number;
+}
+
+export interface LegResult {
+  index: number;
+  id: string;
+  kind: LegKind;
+  label: string;
+  /** 'flown' = completed; 'failed' = could not be completed (see error); 'notReached' = after a failure. */
+  status: 'flown' | 'failed' | 'notReached';
+  /** Why the leg failed, naming the field and limit where there is one. */
+  error: string | null;
+  start: FlightState;
+  end: FlightState;
+  time_s: number;
+  groundDistance_m: number;
+  airDistance_m: number;
+  fuelUsed_kg: number;
+  energyUsed_J: number;
+  meanTas_m_s: number;
+  meanGroundSpeed_m_s: number;
+  /** Lift coefficient and lift-to-drag ratio over the leg (0..0 for allowance legs). */
+  CL: Span;
+  LD: Span;
+  /** Smallest airspeed / stall speed ratio over the leg (0 for allowance legs). */
+  minStallRatio: number;
+  /** Largest power (or thrust power) required, and the power available at that point, W. */
+  powerRequired_W: number;
+  powerAvailable_W: number;
+  /** Wind components against the course: + headwind, + crosswind from the right. */
+  headwind_m_s: number;
+  crosswind_m_s: number;
+  /** Heading flown (degrees true) to hold the course in the wind. */
+  heading_deg: number;
+  /** Accepted integrator steps. */
+  steps: number;
+  series: LegSeries;
+}
+
+export interface Check {
+  /** Stable id, e.g. `mtow`, `tank`, `reserve`, `stall:3`, `power:3`, `ceiling:3`, `socFloor`. */
+  id: string;
+  label: string;
+  legIndex: number | null;
+  /** The value compared and its limit, SI; `quantity` tells how to format them. */
+  value: number;
+  limit: number;
+  quantity: 'mass' | 'fuelMass' | 'energy' | 'ratio' | 'power' | 'altitude' | 'verticalSpeed' | 'volume';
+  /** Relative margin: (limit − value)/limit for upper limits, (value − limit)/limit for lower ones. */
+  margin: number;
+  state: CheckState;
+  /** One plain sentence for the verdict list. */
+  detail: string;
+}
+
+export interface ReserveBreakdown {
+  /** Amounts in kg of fuel (fuel burners) or J of usable energy (electric). */
+  contingency: number;
+  alternate: number;
+  hold: number;
+  /** Battery floor (electric only). */
+  floor: number;
+  total: number;
+}
+
+export interface PlanResult {
+  consumable: Consumable;
+  legs: LegResult[];
+  /** True when every leg was flown. */
+  completed: boolean;
+  /** First leg that could not be flown, with the reason. */
+  failure: { legIndex: number; message: string } | null;
+  takeoffMass_kg: number;
+  totals: {
+    time_s: number;
+    groundDistance_m: number;
+    airDistance_m: number;
+    fuelUsed_kg: number;
+    energyUsed_J: number;
+  };
+  /** What is left on landing (fuel kg or usable energy J) and as a fraction of the start amount. */
+  landing: { remaining: number; fractionOfStart: number; soc: number };
+  reserve: { required: ReserveBreakdown; kept: boolean; margin: number };
+  checks: Check[];
+  /** Worst state among the checks; 'fails' when any leg failed. */
+  verdict: CheckState;
+  /** Non-fatal remarks: inputs outside common practice, clipped speeds, etc. */
+  warnings: string[];
+}
