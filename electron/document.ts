@@ -1,0 +1,243 @@
+/**
+ * The open document and the handlers behind every IPC channel: which file the plan
+ * belongs to, whether it has unsaved changes, and the open/save/export flows. All
+ * Electron calls (dialogs, printing, the window) come in through `ShellPorts`, so
+ * this runs and is tested under plain Node.
+ */
+import path from 'node:path';
+import { existsSync } from 'node:fs';
+import type { Plan } from '../core/plan/schema.ts';
+import {
+  failure,
+  type Handlers,
+  type Outcome,
+  type OpenedPlan,
+  type RecentFile,
+} from './contract.ts';
+import type { MenuCommand } from './channels.ts';
+import {
+  addRecent,
+  atomicWrite,
+  clearAutosave,
+  describeFsError,
+  readAutosave,
+  readPlanFile,
+  readRecent,
+  refuseUnloadablePlan,
+  removeRecent,
+  safeFileName,
+  savePlanFile,
+  writeAutosave,
+  type WriteOps,
+} from './files.ts';
+
+export type SaveKind = 'plan' | 'pdf' | 'csv';
+export type CloseChoice = 'save' | 'discard' | 'cancel';
+
+/** What the document needs from Electron; main.ts supplies dialogs and the window. */
+export interface ShellPorts {
+  userDataDir: string;
+  chooseOpenPath(): Promise<string | null>;
+  chooseSavePath(kind: SaveKind, defaultPath: string): Promise<string | null>;
+  /** "Discard unsaved changes?" → true to go on. */
+  confirmDiscard(): Promise<boolean>;
+  /** "Save changes before closing?" */
+  askSaveBeforeClose(planName: string): Promise<CloseChoice>;
+  printPdf(): Promise<Uint8Array>;
+  showTitle(name: string, dirty: boolean, filePath: string | null): void;
+  recentChanged(files: RecentFile[]): void;
+  sendMenuCommand(command: MenuCommand): void;
+  /** Closes the window for good (the close prompt has been answered). */
+  closeWindow(): void;
+  writeOps?: Partial<WriteOps>;
+}
+
+export const PLAN_EXTENSION = '.legwise.json';
+export const UNTITLED = 'Untitled plan';
+
+export function recentStorePath(userDataDir: string): string {
+  return path.join(userDataDir, 'recent.json');
+}
+
+export function toRecentFiles(paths: readonly string[]): RecentFile[] {
+  return paths.map((filePath) => ({ filePath, name: path.basename(filePath) }));
+}
+
+export interface DocumentState {
+  filePath: string | null;
+  /** Where a save dialog should start for a plan never saved (e.g. a recovered autosave). */
+  suggestedPath: string | null;
+  name: string;
+  dirty: boolean;
+  closeAfterSave: boolean;
+}
+
+export function createDocument(ports: ShellPorts) {
+  const state: DocumentState = {
+    filePath: null,
+    suggestedPath: null,
+    name: UNTITLED,
+    dirty: false,
+    closeAfterSave: false,
+  };
+  const recentStore = recentStorePath(ports.userDataDir);
+
+  const showTitle = () => ports.showTitle(state.name, state.dirty, state.filePath);
+  const publishRecent = (list: string[]) => ports.recentChanged(toRecentFiles(list));
+
+  async function mayDiscard(): Promise<boolean> {
+    return !state.dirty || (await ports.confirmDiscard());
+  }
+
+  async function openPath(filePath: string): Promise<Outcome<OpenedPlan>> {
+    const loaded = await readPlanFile(filePath);
+    if (!loaded.ok) return loaded;
+    Object.assign(state, { filePath, suggestedPath: null, name: loaded.plan.name, dirty: false });
+    showTitle();
+    publishRecent(await addRecent(recentStore, filePath));
+    return { ok: true, plan: loaded.plan, warnings: loaded.warnings, filePath };
+  }
+
+  async function writePlan(filePath: string, plan: Plan): Promise<Outcome<{ filePath: string }>> {
+    const refused = refuseUnloadablePlan(plan);
+    if (refused) {
+      state.closeAfterSave = false;
+      return refused;
+    }
+    try {
+      await savePlanFile(filePath, plan, ports.writeOps);
+    } catch (error) {
+      state.closeAfterSave = false;
+      return failure(
+        'WRITE_FAILED',
+        `Could not save ${path.basename(filePath)}: ${describeFsError(error)}.`,
+      );
+    }
+    Object.assign(state, { filePath, suggestedPath: null, name: plan.name, dirty: false });
+    showTitle();
+    publishRecent(await addRecent(recentStore, filePath));
+    if (state.closeAfterSave) ports.closeWindow();
+    return { ok: true, filePath };
+  }
+
+  async function saveAs(plan: Plan): Promise<Outcome<{ filePath: string }>> {
+    const refused = refuseUnloadablePlan(plan);
+    if (refused) {
+      state.closeAfterSave = false;
+      return refused;
+    }
+    const start = state.filePath ?? state.suggestedPath ?? safeFileName(plan.name, PLAN_EXTENSION);
+    const target = await ports.chooseSavePath('plan', start);
+    if (target === null) {
+      state.closeAfterSave = false;
+      return failure('CANCELLED', 'Save cancelled.');
+    }
+    return writePlan(target, plan);
+  }
+
+  async function exportBytes(
+    kind: SaveKind,
+    suggestedName: string,
+    produce: () => Promise<Uint8Array | string>,
+  ): Promise<Outcome<{ filePath: string }>> {
+    const target = await ports.chooseSavePath(kind, safeFileName(suggestedName, `.${kind}`));
+    if (target === null) return failure('CANCELLED', 'Export cancelled.');
+    try {
+      await atomicWrite(target, await produce(), ports.writeOps ? { ops: ports.writeOps } : {});
+    } catch (error) {
+      return failure(
+        'WRITE_FAILED',
+        `Could not export ${path.basename(target)}: ${describeFsError(error)}.`,
+      );
+    }
+    return { ok: true, filePath: target };
+  }
+
+  const handlers: Handlers = {
+    async newPlan() {
+      if (!(await mayDiscard())) return failure('CANCELLED', 'Kept the current plan.');
+      Object.assign(state, { filePath: null, suggestedPath: null, name: UNTITLED, dirty: false });
+      showTitle();
+      return { ok: true };
+    },
+    async openPlan() {
+      if (!(await mayDiscard())) return failure('CANCELLED', 'Kept the current plan.');
+      const filePath = await ports.chooseOpenPath();
+      return filePath === null ? failure('CANCELLED', 'Open cancelled.') : openPath(filePath);
+    },
+    async openRecent(filePath) {
+      if (!existsSync(filePath)) {
+        publishRecent(await removeRecent(recentStore, filePath));
+        return failure(
+          'NOT_FOUND',
+          `${path.basename(filePath)} no longer exists; removed it from the recent list.`,
+        );
+      }
+      if (!(await mayDiscard())) return failure('CANCELLED', 'Kept the current plan.');
+      return openPath(filePath);
+    },
+    async savePlan(plan) {
+      return state.filePath === null ? saveAs(plan) : writePlan(state.filePath, plan);
+    },
+    savePlanAs: saveAs,
+    async listRecent() {
+      return { ok: true, files: toRecentFiles(await readRecent(recentStore)) };
+    },
+    async setDirty({ dirty, name }) {
+      Object.assign(state, { dirty, name: name.trim() || UNTITLED });
+      showTitle();
+      return { ok: true };
+    },
+    async autosave(plan) {
+      const refused = refuseUnloadablePlan(plan);
+      if (refused) return refused;
+      try {
+        await writeAutosave(ports.userDataDir, plan, state.filePath ?? state.suggestedPath);
+      } catch (error) {
+        return failure('WRITE_FAILED', `Autosave failed: ${describeFsError(error)}.`);
+      }
+      return { ok: true };
+    },
+    async recoverAutosave() {
+      const recovered = await readAutosave(ports.userDataDir);
+      if (recovered?.sourcePath) state.suggestedPath = recovered.sourcePath;
+      return { ok: true, recovered };
+    },
+    async discardAutosave() {
+      await clearAutosave(ports.userDataDir);
+      return { ok: true };
+    },
+    exportPdf: ({ suggestedName }) => exportBytes('pdf', suggestedName, () => ports.printPdf()),
+    exportCsv: ({ text, suggestedName }) => exportBytes('csv', suggestedName, async () => text),
+  };
+
+  /**
+   * The window asks to close. 'close' lets it; 'cancel' keeps it open. Choosing Save
+   * asks the page to save (it holds the plan); a successful save then closes.
+   */
+  async function onCloseRequested(): Promise<'close' | 'cancel'> {
+    if (!state.dirty) return 'close';
+    const choice = await ports.askSaveBeforeClose(state.name);
+    if (choice === 'discard') return 'close';
+    if (choice === 'save') {
+      state.closeAfterSave = true;
+      ports.sendMenuCommand({ kind: 'save' });
+    }
+    return 'cancel';
+  }
+
+  /** After the window has closed on purpose: a clean exit leaves no autosave behind. */
+  async function onClosed(): Promise<void> {
+    await clearAutosave(ports.userDataDir);
+  }
+
+  return {
+    handlers,
+    state: state as Readonly<DocumentState>,
+    onCloseRequested,
+    onClosed,
+    listRecent: () => readRecent(recentStore),
+  };
+}
+
+export type LegwiseDocument = ReturnType<typeof createDocument>;

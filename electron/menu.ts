@@ -1,0 +1,147 @@
+/**
+ * The application menu as a pure function of the platform, following each OS's
+ * convention (macOS: an app menu named after the app holding About and Quit, and a
+ * Window menu; Windows/Linux: Quit/Exit at the end of File, About under Help).
+ * Shortcuts use CmdOrCtrl so they read ⌘ on macOS and Ctrl elsewhere.
+ */
+import type { MenuItemConstructorOptions } from 'electron';
+import type { MenuCommand } from './channels.ts';
+import type { RecentFile } from './contract.ts';
+
+export interface MenuHandlers {
+  /** Forward a command to the page (it holds the plan). */
+  command(command: MenuCommand): void;
+  about(): void;
+  quit(): void;
+}
+
+export interface MenuOptions {
+  appName: string;
+  recent: readonly RecentFile[];
+  /** Developer tools only while developing; never in a packaged app. */
+  devTools: boolean;
+}
+
+export const ACCELERATORS = {
+  new: 'CmdOrCtrl+N',
+  open: 'CmdOrCtrl+O',
+  save: 'CmdOrCtrl+S',
+  saveAs: 'CmdOrCtrl+Shift+S',
+  exportPdf: 'CmdOrCtrl+P',
+  exportCsv: 'CmdOrCtrl+Shift+E',
+} as const;
+
+/** Quit shortcut per platform (Windows names it Exit and closes with Alt+F4). */
+export function quitAccelerator(platform: NodeJS.Platform): string {
+  if (platform === 'darwin') return 'Cmd+Q';
+  if (platform === 'win32') return 'Alt+F4';
+  return 'Ctrl+Q';
+}
+
+function recentSubmenu(
+  handlers: MenuHandlers,
+  recent: readonly RecentFile[],
+): MenuItemConstructorOptions[] {
+  if (recent.length === 0) return [{ label: 'No recent plans', enabled: false }];
+  return recent.map((file) => ({
+    label: file.name,
+    toolTip: file.filePath,
+    click: () => handlers.command({ kind: 'openRecent', filePath: file.filePath }),
+  }));
+}
+
+function fileMenu(
+  platform: NodeJS.Platform,
+  handlers: MenuHandlers,
+  options: MenuOptions,
+): MenuItemConstructorOptions {
+  const send = (kind: keyof typeof ACCELERATORS) => () => handlers.command({ kind });
+  const items: MenuItemConstructorOptions[] = [
+    { label: 'New Plan', accelerator: ACCELERATORS.new, click: send('new') },
+    { label: 'Open…', accelerator: ACCELERATORS.open, click: send('open') },
+    { label: 'Open Recent', submenu: recentSubmenu(handlers, options.recent) },
+    { type: 'separator' },
+    { label: 'Save', accelerator: ACCELERATORS.save, click: send('save') },
+    { label: 'Save As…', accelerator: ACCELERATORS.saveAs, click: send('saveAs') },
+    { type: 'separator' },
+    {
+      label: 'Export Report as PDF…',
+      accelerator: ACCELERATORS.exportPdf,
+      click: send('exportPdf'),
+    },
+    {
+      label: 'Export Results as CSV…',
+      accelerator: ACCELERATORS.exportCsv,
+      click: send('exportCsv'),
+    },
+  ];
+  if (platform === 'darwin') items.push({ type: 'separator' }, { role: 'close' });
+  else {
+    items.push(
+      { type: 'separator' },
+      {
+        label: platform === 'win32' ? 'Exit' : 'Quit',
+        accelerator: quitAccelerator(platform),
+        click: handlers.quit,
+      },
+    );
+  }
+  return { label: 'File', submenu: items };
+}
+
+function viewMenu(options: MenuOptions): MenuItemConstructorOptions {
+  const items: MenuItemConstructorOptions[] = [
+    { role: 'resetZoom' },
+    { role: 'zoomIn' },
+    { role: 'zoomOut' },
+    { type: 'separator' },
+    { role: 'togglefullscreen' },
+  ];
+  if (options.devTools)
+    items.push({ type: 'separator' }, { role: 'reload' }, { role: 'toggleDevTools' });
+  return { label: 'View', submenu: items };
+}
+
+export function buildMenuTemplate(
+  platform: NodeJS.Platform,
+  handlers: MenuHandlers,
+  options: MenuOptions,
+): MenuItemConstructorOptions[] {
+  const about: MenuItemConstructorOptions = {
+    label: `About ${options.appName}`,
+    click: handlers.about,
+  };
+  const edit: MenuItemConstructorOptions = { role: 'editMenu' };
+  if (platform === 'darwin') {
+    return [
+      {
+        label: options.appName,
+        submenu: [
+          about,
+          { type: 'separator' },
+          { role: 'services' },
+          { type: 'separator' },
+          { role: 'hide' },
+          { role: 'hideOthers' },
+          { role: 'unhide' },
+          { type: 'separator' },
+          {
+            label: `Quit ${options.appName}`,
+            accelerator: quitAccelerator(platform),
+            click: handlers.quit,
+          },
+        ],
+      },
+      fileMenu(platform, handlers, options),
+      edit,
+      viewMenu(options),
+      { role: 'windowMenu' },
+    ];
+  }
+  return [
+    fileMenu(platform, handlers, options),
+    edit,
+    viewMenu(options),
+    { label: 'Help', submenu: [about] },
+  ];
+}

@@ -1,0 +1,81 @@
+/** The main entry wired against a fake Electron: what happens at start and on close. */
+import { EventEmitter } from 'node:events';
+import { promises as fsp } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { newPlan } from '../../core/plan/defaults.ts';
+import { INVOKE_METHODS, channelOf } from '../../electron/channels.ts';
+import { autosavePaths } from '../../electron/files.ts';
+
+vi.mock('electron', () => import('./fakeElectron.ts'));
+import { BrowserWindow, Menu, app, dialog, ipcMain, session } from './fakeElectron.ts';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+const indexUrl = pathToFileURL(path.join(root, 'dist', 'index.html')).href;
+const fromPage = { senderFrame: { url: indexUrl, parent: null } };
+const invoke = (method: (typeof INVOKE_METHODS)[number], ...args: unknown[]) =>
+  ipcMain.handlers.get(channelOf(method))?.(fromPage, ...args);
+
+let win: BrowserWindow;
+beforeAll(async () => {
+  app.userData = await fsp.mkdtemp(path.join(os.tmpdir(), 'legwise-main-'));
+  await import('../../electron/main.ts');
+  await vi.waitFor(() => expect(BrowserWindow.instances).toHaveLength(1));
+  win = BrowserWindow.instances[0] as BrowserWindow;
+});
+afterAll(async () => {
+  await fsp.rm(app.userData, { recursive: true, force: true });
+});
+
+describe('electron/main.ts', () => {
+  it('sandboxes every renderer and hardens every web contents', () => {
+    expect(app.enableSandbox).toHaveBeenCalled();
+    const contents = Object.assign(new EventEmitter(), { setWindowOpenHandler: vi.fn() });
+    app.emit('web-contents-created', {}, contents);
+    const navigation = { preventDefault: vi.fn() };
+    contents.emit('will-navigate', navigation, 'https://example.com/');
+    expect(navigation.preventDefault).toHaveBeenCalled();
+    expect(contents.setWindowOpenHandler).toHaveBeenCalled();
+    expect(session.defaultSession.setPermissionRequestHandler).toHaveBeenCalled();
+    expect(session.defaultSession.webRequest.onBeforeRequest).toHaveBeenCalled();
+  });
+
+  it('opens one window on the built page with the bundled preload', () => {
+    expect(win.loadFile).toHaveBeenCalledWith(path.join(root, 'dist', 'index.html'));
+    expect(win.loadURL).not.toHaveBeenCalled();
+    const prefs = win.options.webPreferences as Record<string, unknown>;
+    expect(prefs.preload).toBe(path.join(root, 'electron', 'preload.js'));
+    expect(prefs.sandbox).toBe(true);
+    expect(win.title).toBe('Untitled plan — Legwise');
+    expect(Menu.setApplicationMenu).toHaveBeenCalled();
+  });
+
+  it('answers every contract channel, for our page only', async () => {
+    expect([...ipcMain.handlers.keys()].sort()).toEqual(INVOKE_METHODS.map(channelOf).sort());
+    expect(await invoke('listRecent')).toEqual({ ok: true, files: [] });
+    const foreign = { senderFrame: { url: 'https://example.com/', parent: null } };
+    expect(await ipcMain.handlers.get(channelOf('listRecent'))?.(foreign)).toMatchObject({
+      code: 'FORBIDDEN',
+    });
+  });
+
+  it('shows unsaved changes in the title and asks before closing', async () => {
+    await invoke('setDirty', { dirty: true, name: 'Coast run' });
+    expect(win.title).toBe('• Coast run — Legwise');
+    await invoke('autosave', newPlan());
+    await fsp.access(autosavePaths(app.userData).plan);
+
+    dialog.showMessageBox.mockResolvedValueOnce({ response: 2, checkboxChecked: false }); // Cancel
+    win.close();
+    await vi.waitFor(() => expect(dialog.showMessageBox).toHaveBeenCalledTimes(1));
+    expect(win.destroyed).toBe(false);
+
+    dialog.showMessageBox.mockResolvedValueOnce({ response: 1, checkboxChecked: false }); // Don't Save
+    win.close();
+    await vi.waitFor(() => expect(win.destroyed).toBe(true));
+    // Closing on purpose is a clean exit: the autosave goes.
+    await expect(fsp.access(autosavePaths(app.userData).plan)).rejects.toThrow();
+  });
+});

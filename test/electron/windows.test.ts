@@ -1,0 +1,56 @@
+import { describe, expect, it, vi } from 'vitest';
+
+vi.mock('electron', () => import('./fakeElectron.ts'));
+import { BrowserWindow } from './fakeElectron.ts';
+import { createMainWindow, mainWindowOptions, windowTitle } from '../../electron/windows.ts';
+
+describe('mainWindowOptions', () => {
+  it('sets every security setting of Electron’s checklist', () => {
+    const prefs = mainWindowOptions('/app/dist-electron/preload.js').webPreferences;
+    expect(prefs).toMatchObject({
+      preload: '/app/dist-electron/preload.js',
+      contextIsolation: true,
+      sandbox: true,
+      nodeIntegration: false,
+      nodeIntegrationInWorker: false,
+      nodeIntegrationInSubFrames: false,
+      webSecurity: true,
+      allowRunningInsecureContent: false,
+      webviewTag: false,
+      experimentalFeatures: false,
+      navigateOnDragDrop: false,
+      spellcheck: false,
+    });
+    expect(prefs).not.toHaveProperty('enableBlinkFeatures');
+    expect(prefs).not.toHaveProperty('additionalArguments');
+  });
+});
+
+describe('windowTitle', () => {
+  it('reads "<plan> — Legwise" with a bullet for unsaved changes', () => {
+    expect(windowTitle('Coast run', false)).toBe('Coast run — Legwise');
+    expect(windowTitle('Coast run', true)).toBe('• Coast run — Legwise');
+  });
+});
+
+describe('createMainWindow', () => {
+  it('loads the built page from disk, never a remote URL', () => {
+    const win = createMainWindow('/app/p.js', {
+      indexFile: '/app/dist/index.html',
+    }) as unknown as BrowserWindow;
+    expect(win.loadFile).toHaveBeenCalledWith('/app/dist/index.html');
+    expect(win.loadURL).not.toHaveBeenCalled();
+    expect(win.options).toEqual(mainWindowOptions('/app/p.js'));
+    win.emit('ready-to-show');
+    expect(win.show).toHaveBeenCalled();
+  });
+
+  it('uses the dev server only when one is given', () => {
+    const win = createMainWindow('/app/p.js', {
+      indexFile: '/app/dist/index.html',
+      devServerUrl: 'http://127.0.0.1:5173/',
+    }) as unknown as BrowserWindow;
+    expect(win.loadURL).toHaveBeenCalledWith('http://127.0.0.1:5173/');
+    expect(win.loadFile).not.toHaveBeenCalled();
+  });
+});
