@@ -1,0 +1,160 @@
+/**
+ * Numbers for people: one place that turns an SI value into text in the chosen unit system
+ * (core/units.ts) with a sensible resolution per quantity — altitude to 1 m or 10 ft,
+ * distance to 0.1 km or 0.1 NM, durations as h:mm or m:ss. Used by the CLI, reports and UI.
+ * A value that is not finite prints as "—", never as NaN or Infinity.
+ */
+import { fromSI, UNIT_SYSTEMS, UNITS } from './units.ts';
+import type { Quantity, UnitId, UnitSystemId } from './units.ts';
+
+/** Printed in place of a value that is missing or not a finite number. */
+export const NO_VALUE = '—';
+
+export interface FormatOptions {
+  /** Use this unit instead of the unit system's choice for the quantity. */
+  unit?: UnitId;
+  /** Append the unit label (default true). */
+  withUnit?: boolean;
+  /** Fixed number of decimals instead of the per-quantity resolution. */
+  decimals?: number;
+  /** Put a "+" in front of positive values (changes, margins). */
+  signed?: boolean;
+}
+
+/** Resolution of a displayed value: round to a multiple of `step`, show `decimals` places. */
+interface Resolution {
+  step?: number;
+  decimals: number;
+}
+
+/** Decimals that leave `sig` significant digits (at most 6). */
+export function significantDecimals(value: number, sig: number): number {
+  const a = Math.abs(value);
+  if (!(a > 0) || !Number.isFinite(a)) return 0;
+  return Math.min(6, Math.max(0, sig - 1 - Math.floor(Math.log10(a))));
+}
+
+/** Common-practice display resolution for a quantity shown in `unit`. */
+function resolution(quantity: Quantity, unit: UnitId, value: number): Resolution {
+  const a = Math.abs(value);
+  switch (quantity) {
+    case 'altitude':
+      return unit === 'ft' ? { step: 10, decimals: 0 } : { decimals: unit === 'm' ? 0 : 1 };
+    case 'distance':
+      return { decimals: unit === 'm' || unit === 'ft' ? 0 : 1 };
+    case 'shortDistance':
+    case 'thrust':
+    case 'angle':
+      return { decimals: unit === 'kN' ? 1 : 0 };
+    case 'airspeed':
+    case 'groundSpeed':
+      return { decimals: unit === 'm_s' ? 1 : 0 };
+    case 'verticalSpeed':
+      return unit === 'ft_min' ? { step: 10, decimals: 0 } : { decimals: 1 };
+    case 'mass':
+    case 'fuelMass':
+      return { decimals: a < 10 ? 2 : a < 100 ? 1 : 0 };
+    case 'energy':
+      return { decimals: unit === 'J' ? 0 : a < 10 ? 2 : a < 100 ? 1 : 0 };
+    case 'power':
+      return { decimals: unit === 'W' ? 0 : a < 10 ? 2 : a < 100 ? 1 : 0 };
+    case 'fuelVolume':
+    case 'temperature':
+    case 'temperatureDelta':
+    case 'ratio':
+      return { decimals: 1 };
+    case 'pressure':
+      return { decimals: unit === 'inHg' ? 2 : unit === 'hPa' && a < 100 ? 1 : 0 };
+    case 'area':
+      return { decimals: a < 10 ? 2 : 1 };
+    case 'time':
+      return { decimals: unit === 'h' ? 2 : unit === 'min' ? 1 : 0 };
+    default:
+      return { decimals: significantDecimals(value, 3) };
+  }
+}
+
+/** Fixed-point text without "-0" or exponent noise; "—" when not finite. */
+export function formatNumber(value: number, decimals: number, signed = false): string {
+  if (!Number.isFinite(value)) return NO_VALUE;
+  let text = value.toFixed(Math.max(0, Math.min(20, Math.round(decimals))));
+  if (/^-0(\.0*)?$/.test(text)) text = text.slice(1);
+  return signed && value > 0 && !/^0(\.0*)?$/.test(text) ? `+${text}` : text;
+}
+
+/** A plain number (CL, L/D, ratios) with `sig` significant digits; "—" when not finite. */
+export function formatSignificant(value: number, sig = 3): string {
+  return formatNumber(value, significantDecimals(value, sig));
+}
+
+/** The unit a quantity is shown in. */
+export function displayUnitOf(quantity: Quantity, system: UnitSystemId, unit?: UnitId): UnitId {
+  return unit ?? UNIT_SYSTEMS[system][quantity];
+}
+
+/** The unit's label as printed, e.g. `NM`, `kt`, `m²`. */
+export function unitLabel(quantity: Quantity, system: UnitSystemId, unit?: UnitId): string {
+  return UNITS[displayUnitOf(quantity, system, unit)].label;
+}
+
+/** The value in its display unit, rounded to the display resolution, with its decimals. */
+function rounded(value_si: number, quantity: Quantity, system: UnitSystemId, opts: FormatOptions) {
+  const unit = displayUnitOf(quantity, system, opts.unit);
+  const v = fromSI(value_si, unit);
+  const res = resolution(quantity, unit, v);
+  const decimals = Math.max(0, Math.min(20, Math.round(opts.decimals ?? res.decimals)));
+  const stepped =
+    opts.decimals === undefined && res.step !== undefined ? Math.round(v / res.step) * res.step : v;
+  return { unit, value: stepped, decimals };
+}
+
+/** SI value → number in the display unit at the display resolution (CSV); NaN if not finite. */
+export function displayValue(
+  value_si: number,
+  quantity: Quantity,
+  system: UnitSystemId,
+  opts: FormatOptions = {},
+): number {
+  if (!Number.isFinite(value_si)) return Number.NaN;
+  const r = rounded(value_si, quantity, system, opts);
+  return Number(r.value.toFixed(r.decimals));
+}
+
+/** SI value → text in the unit system, e.g. 3048 m as altitude, aviation → "10000 ft". */
+export function formatQuantity(
+  value_si: number,
+  quantity: Quantity,
+  system: UnitSystemId,
+  opts: FormatOptions = {},
+): string {
+  if (!Number.isFinite(value_si)) return NO_VALUE;
+  if (quantity === 'time' && opts.unit === undefined && opts.decimals === undefined) {
+    return formatDuration(value_si);
+  }
+  const r = rounded(value_si, quantity, system, opts);
+  const text = formatNumber(r.value, r.decimals, opts.signed);
+  if (opts.withUnit === false) return text;
+  const label = UNITS[r.unit].label;
+  if (label === '') return text;
+  return label === '°' ? `${text}°` : `${text} ${label}`;
+}
+
+function pad2(n: number): string {
+  return n < 10 ? `0${n}` : String(n);
+}
+
+/**
+ * A duration as "m:ss min" below one hour and "h:mm h" from one hour on (rounded to the
+ * second or the minute); "—" when not finite.
+ */
+export function formatDuration(seconds: number): string {
+  if (!Number.isFinite(seconds)) return NO_VALUE;
+  if (seconds < 0) {
+    const text = formatDuration(-seconds);
+    return /^0:00 /.test(text) ? text : `-${text}`;
+  }
+  const whole = Math.round(seconds);
+  if (whole < 3600) return `${Math.floor(whole / 60)}:${pad2(whole % 60)} min`;
+  const minutes = Math.round(seconds / 60);
+  return `${Math.floor(minutes / 60)}:${pad2(minutes % 60)} h`;
+}

@@ -1,0 +1,239 @@
+/**
+ * End-to-end tests of the `legwise` command through runCli (output captured as strings) and
+ * once as a real child process. Expected numbers are the solver's own results formatted by
+ * core/format.ts: the CLI must print what the solver computed, not recompute it.
+ */
+import { spawnSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+import { CAUTION, runCli } from '../../cli/main.ts';
+import { formatQuantity } from '../../core/format.ts';
+import { parsePlanText } from '../../core/plan/load.ts';
+import { solvePlan } from '../../core/solver/solve.ts';
+import type { PlanResult } from '../../core/solver/types.ts';
+import type { UnitSystemId } from '../../core/units.ts';
+import { DEMO_FILES, demoJson, examplePath, setAt } from '../core/plan/demoPlans.ts';
+
+const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+
+/** Runs the CLI with captured output; `files` are served instead of the disk. */
+function run(argv: string[], files: Record<string, string> = {}) {
+  let out = '';
+  let err = '';
+  const code = runCli(argv, {
+    stdout: (t) => (out += t),
+    stderr: (t) => (err += t),
+    readFile: (p) => files[p] ?? readFileSync(p, 'utf8'),
+  });
+  return { code, out, err };
+}
+
+function solved(file: string): PlanResult {
+  const r = parsePlanText(readFileSync(examplePath(file), 'utf8'));
+  if (!r.ok) throw new Error(JSON.stringify(r.issues));
+  return solvePlan(r.plan);
+}
+
+/** Every number in a JSON tree is finite. */
+function allFinite(node: unknown): boolean {
+  if (typeof node === 'number') return Number.isFinite(node);
+  if (Array.isArray(node)) return node.every(allFinite);
+  if (node && typeof node === 'object') return Object.values(node).every(allFinite);
+  return true;
+}
+
+describe('legwise solve on the demo plans', () => {
+  for (const file of DEMO_FILES) {
+    for (const units of ['si', 'aviation'] as UnitSystemId[]) {
+      it(`${file} (${units}): every leg, the totals, the checks and the caution`, () => {
+        const result = solved(file);
+        const { code, out, err } = run(['solve', examplePath(file), '--units', units]);
+        expect(err).toBe('');
+        expect(code).toBe(0); // the demo plans are feasible
+        const lines = out.split('\n');
+        for (const leg of result.legs) {
+          const name = (leg.label || leg.id).slice(0, 29);
+          expect(lines.some((l) => l.includes(name) && l.includes(leg.kind))).toBe(true);
+        }
+        const total = lines.find((l) => /^\s+Total\s/.test(l));
+        expect(total).toBeDefined();
+        const used =
+          result.consumable === 'fuel' ? result.totals.fuelUsed_kg : result.totals.energyUsed_J;
+        const q = result.consumable === 'fuel' ? 'fuelMass' : 'energy';
+        for (const expected of [
+          formatQuantity(result.totals.time_s, 'time', units),
+          formatQuantity(result.totals.groundDistance_m, 'distance', units, { withUnit: false }),
+          formatQuantity(used, q, units, { withUnit: false }),
+          formatQuantity(result.landing.remaining, q, units, { withUnit: false }),
+        ]) {
+          expect(total).toContain(expected);
+        }
+        for (const check of result.checks) expect(out).toContain(check.label);
+        expect(out).toMatch(/^Verdict: (OK|TIGHT)/m);
+        expect(out.trimEnd().endsWith(CAUTION)).toBe(true);
+      });
+    }
+  }
+});
+
+describe('legwise solve --json and --csv', () => {
+  it.each(DEMO_FILES)('%s --json is the full result plus the caution, with no NaN', (file) => {
+    const { code, out } = run(['solve', examplePath(file), '--json']);
+    expect(code).toBe(0);
+    expect(out).not.toMatch(/NaN|Infinity/);
+    const json = JSON.parse(out) as PlanResult & { caution: string };
+    expect(json.caution).toBe(CAUTION);
+    const result = solved(file);
+    expect(json.legs).toHaveLength(result.legs.length);
+    expect(json.totals.time_s).toBeCloseTo(result.totals.time_s, 6); // same solver, same numbers
+    expect(allFinite(json)).toBe(true);
+  });
+
+  it.each(DEMO_FILES)(
+    '%s --csv has the caution comment, a unit-suffixed header and one row per leg',
+    (file) => {
+      const { code, out } = run(['solve', examplePath(file), '--csv', '--units', 'aviation']);
+      expect(code).toBe(0);
+      const lines = out.trimEnd().split('\n');
+      expect(lines[0]).toBe(`# ${CAUTION}`);
+      const header = lines[1]?.split(',') ?? [];
+      expect(header).toContain('ground_distance_nmi');
+      expect(header).toContain('mean_tas_kt');
+      expect(header.some((h) => /^(fuel|energy)_used_(lb|Wh)$/.test(h))).toBe(true);
+      const rows = lines.slice(2);
+      expect(rows).toHaveLength(solved(file).legs.length);
+      expect(out).not.toMatch(/NaN|Infinity/);
+    },
+  );
+});
+
+describe('bad files and bad command lines', () => {
+  it('a bad file exits 2 with path-named messages and no stack trace', () => {
+    const data = demoJson('piston-tourer.json');
+    setAt(data, 'aircraft.mass.empty_kg', -3);
+    setAt(data, 'legs.2.kind', 'hover');
+    const { code, out, err } = run(['solve', 'bad.json'], { 'bad.json': JSON.stringify(data) });
+    expect(code).toBe(2);
+    expect(out).toBe('');
+    expect(err).toContain('bad.json: not a usable plan file (2 problems):');
+    expect(err).toContain('aircraft.mass.empty_kg: -3 — must be from 0.01 to 500000 kg');
+    expect(err).toContain('legs.2.kind: "hover" — must be one of');
+    expect(err).not.toMatch(/\n\s+at /);
+  });
+
+  it('broken JSON, a missing file, and check on a bad file exit 2', () => {
+    const broken = run(['solve', 'x.json'], { 'x.json': '{\n  "format": "legwise-plan",\n}' });
+    expect(broken.code).toBe(2);
+    expect(broken.err).toContain('file: not valid JSON at line 3, column 1');
+    const missing = run(['solve', 'no/such/plan.json']);
+    expect(missing.code).toBe(2);
+    expect(missing.err).toBe('legwise: cannot read no/such/plan.json: no such file\n');
+    expect(run(['check', 'x.json'], { 'x.json': '[]' }).code).toBe(2);
+  });
+
+  it('usage errors exit 2', () => {
+    for (const argv of [
+      [],
+      ['fly', 'a.json'],
+      ['solve'],
+      ['solve', 'a', 'b'],
+      ['solve', 'a', '--units', 'imperial'],
+      ['solve', 'a', '--bogus'],
+      ['tune', 'a', '--csv'],
+      ['solve', 'a', '--csv', '--json'],
+    ]) {
+      const r = run(argv);
+      expect(r.code, argv.join(' ')).toBe(2);
+      expect(r.err).toMatch(/^legwise: .*\nRun "legwise --help" for usage\.\n$/);
+    }
+  });
+
+  it('--help and --version', () => {
+    const help = run(['--help']);
+    expect(help.code).toBe(0);
+    expect(help.out).toContain('Usage: legwise <command> <plan.json>');
+    const pkg = JSON.parse(readFileSync(`${ROOT}package.json`, 'utf8')) as { version: string };
+    expect(run(['--version']).out).toBe(`legwise ${pkg.version}\n`);
+  });
+});
+
+describe('verdicts and the other commands', () => {
+  it('a plan whose checks fail exits 1 and still prints the table and the caution', () => {
+    const data = demoJson('piston-tourer.json');
+    setAt(data, 'aircraft.mass.payload_kg', 600); // 780 + 600 + 150 kg is far above the 1270 kg MTOW
+    const { code, out } = run(['solve', 'heavy.json'], { 'heavy.json': JSON.stringify(data) });
+    expect(code).toBe(1);
+    expect(out).toMatch(/^Verdict: FAILS/m);
+    expect(out).toContain(CAUTION);
+  });
+
+  it('check validates only and lists warnings', () => {
+    const ok = run(['check', examplePath('light-jet.json')]);
+    expect(ok.code).toBe(0);
+    expect(ok.out).toContain('valid plan "Tessaro TJ-6');
+    const data = demoJson('light-jet.json');
+    setAt(data, 'aircraft.polar.CD0', 0.012); // below the 0.015–0.025 common range for jets
+    const warned = run(['check', 'w.json', '--json'], { 'w.json': JSON.stringify(data) });
+    expect(warned.code).toBe(0);
+    expect(JSON.parse(warned.out).warnings[0]).toContain('aircraft.polar.CD0: 0.012 is below');
+  });
+
+  it('tune prints each optimizer section and the caution', () => {
+    const { code, out, err } = run([
+      'tune',
+      examplePath('piston-tourer.json'),
+      '--units',
+      'aviation',
+    ]);
+    expect(err).toBe('');
+    expect(code).toBe(0);
+    for (const heading of [
+      'Best cruise altitude',
+      'Best speed per cruise and loiter leg',
+      'Maximum payload',
+      'Reserve margin on landing',
+    ]) {
+      expect(out).toContain(heading);
+    }
+    expect(out).toContain('Cruise to the coast');
+    expect(out).not.toMatch(/NaN|Infinity/);
+    expect(out.trimEnd().endsWith(CAUTION)).toBe(true);
+  });
+
+  it('tune --json parses and carries the caution', () => {
+    const { code, out } = run(['tune', examplePath('survey-uav-electric.json'), '--json']);
+    expect(code).toBe(0);
+    const json = JSON.parse(out) as { caution: string; bestSpeeds: unknown[] };
+    expect(json.caution).toBe(CAUTION);
+    expect(json.bestSpeeds).toHaveLength(3); // two cruise legs and one loiter leg
+    expect(out).not.toMatch(/NaN|Infinity/);
+  });
+});
+
+describe('the installed command', () => {
+  it('node bin/legwise.mjs solve examples/piston-tourer.json runs as a child process', () => {
+    const child = spawnSync(
+      process.execPath,
+      ['bin/legwise.mjs', 'solve', 'examples/piston-tourer.json'],
+      {
+        cwd: ROOT,
+        encoding: 'utf8',
+      },
+    );
+    expect(child.stderr).toBe('');
+    expect(child.status).toBe(0);
+    expect(child.stdout).toContain('Corvale CT-4');
+    expect(child.stdout).toMatch(/^\s+Total\s/m);
+    expect(child.stdout.trimEnd().endsWith(CAUTION)).toBe(true);
+  });
+
+  it('exits 2 with a message for a missing file', () => {
+    const child = spawnSync(process.execPath, ['bin/legwise.mjs', 'solve', 'examples/none.json'], {
+      cwd: ROOT,
+      encoding: 'utf8',
+    });
+    expect(child.status).toBe(2);
+    expect(child.stderr).toBe('legwise: cannot read examples/none.json: no such file\n');
+  });
+});
