@@ -1,0 +1,61 @@
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../../core/errors.ts';
+import { bestCruiseAltitude } from '../../../core/optimize/altitudeSweep.ts';
+import { solvePlan } from '../../../core/solver/solve.ts';
+import { mission, propCruiseByFuel } from './fixtures.ts';
+
+describe('bestCruiseAltitude', () => {
+  it('a jet prefers a higher cruise altitude than a piston propeller aircraft', () => {
+    // Common practice: jet range grows with altitude (thinner air at the same CL means more
+    // speed for the same TSFC), a normally aspirated piston gains little and pays to climb.
+    const jet = bestCruiseAltitude(mission('jet', 1_500_000), { points: 13 });
+    const piston = bestCruiseAltitude(mission('prop', 500_000), { points: 13 });
+    expect(jet.best).not.toBeNull();
+    expect(piston.best).not.toBeNull();
+    expect(jet.best!.altitude_m).toBeGreaterThan(piston.best!.altitude_m + 3000);
+  });
+
+  it('the best altitude leaves at least as much on landing as every feasible grid point', () => {
+    const r = bestCruiseAltitude(mission('jet', 1_500_000), { points: 9 });
+    r.curve.remaining.forEach((v, i) => {
+      if (r.curve.feasible[i]) expect(r.best!.remaining).toBeGreaterThanOrEqual(v);
+    });
+    // The answer is a real mission: solving it at that altitude gives the same remainder
+    // (consistency with the solver, relative 1e-9).
+    const plan = mission('jet', 1_500_000);
+    (plan.legs[1] as { toAltitude_m: number }).toAltitude_m = r.best!.altitude_m;
+    const solved = solvePlan(plan).landing.remaining;
+    expect(Math.abs(solved - r.best!.remaining) / solved).toBeLessThan(1e-9);
+  });
+
+  it('marks the altitudes where the mission fails as infeasible, with finite numbers', () => {
+    // The electric UAV pays for every metre of climb from its pack; flown high enough, the
+    // 30 km mission no longer fits the battery.
+    const r = bestCruiseAltitude(mission('electric', 30_000), { points: 11 });
+    expect(r.curve.feasible.some((f) => f)).toBe(true);
+    expect(r.curve.feasible.some((f) => !f)).toBe(true);
+    r.curve.remaining.forEach((v, i) => {
+      expect(Number.isFinite(v)).toBe(true);
+      expect(Number.isFinite(r.curve.altitude_m[i]!)).toBe(true);
+      if (!r.curve.feasible[i]) expect(v).toBe(0);
+    });
+  });
+
+  it('stops the grid where the climb can go no higher, below the ceiling', () => {
+    const plan = mission('prop', 300_000);
+    plan.aircraft.ceiling_m = 12_000;
+    const r = bestCruiseAltitude(plan, { points: 7, refine: false });
+    expect(r.top_m).toBeLessThan(12_000);
+    expect(r.curve.altitude_m[r.curve.altitude_m.length - 1]).toBe(r.top_m);
+    // Departure elevation + 300 m is the bottom of the grid (common practice floor).
+    expect(r.curve.altitude_m[0]).toBe(plan.environment.departureElevation_m + 300);
+  });
+
+  it('never changes the plan and refuses a plan without a climb before the cruise', () => {
+    const plan = mission('prop', 300_000);
+    const before = JSON.stringify(plan);
+    bestCruiseAltitude(plan, { points: 5 });
+    expect(JSON.stringify(plan)).toBe(before);
+    expect(() => bestCruiseAltitude(propCruiseByFuel(50))).toThrow(InputError);
+  });
+});
