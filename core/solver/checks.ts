@@ -1,0 +1,186 @@
+/**
+ * Feasibility checks with margins (DESIGN.md §3, common practice): take-off mass ≤ MTOW,
+ * fuel volume ≤ tank, reserve kept on landing, per leg speed ≥ stallFactor × V_stall, power
+ * required ≤ available, rate of climb ≥ the service-ceiling rate, altitude ≤ ceiling, and the
+ * battery never below its floor. Margin: (limit − value)/limit for upper limits,
+ * (value − limit)/limit for lower ones; fails below 0, tight below settings.tightMargin.
+ */
+import type { Plan } from '../plan/schema.ts';
+import { fuelDensity_kg_L } from '../propulsion/index.ts';
+import type { LegOutcome } from './legs/index.ts';
+import { legName } from './legs/common.ts';
+import type { FlightModel } from './model.ts';
+import { fmt } from './point.ts';
+import { LIMIT_TOLERANCE } from './segment.ts';
+import type { Check, CheckState } from './types.ts';
+
+interface CheckInput {
+  id: string;
+  label: string;
+  legIndex: number | null;
+  value: number;
+  limit: number;
+  quantity: Check['quantity'];
+  /** 'max': value must not exceed limit; 'min': value must not fall below it. */
+  bound: 'max' | 'min';
+  /** Scale of the margin when the limit is (near) 0. */
+  reference: number;
+  detail: string;
+  /** Fails whatever the numbers say (the reserve of a mission that was not completed). */
+  fails?: boolean;
+}
+
+function makeCheck(c: CheckInput, tight: number): Check {
+  // A limit at or near 0 makes a relative margin meaningless: measure against the scale.
+  const scale = c.reference > 1e-9 ? c.reference : 1;
+  const ref = Math.max(Math.abs(c.limit), 1e-6 * scale);
+  const margin = (c.bound === 'max' ? c.limit - c.value : c.value - c.limit) / ref;
+  const state: CheckState =
+    c.fails || margin < -LIMIT_TOLERANCE ? 'fails' : margin < tight ? 'tight' : 'ok';
+  const { bound: _b, reference: _r, fails: _f, ...rest } = c;
+  return { ...rest, margin, state };
+}
+
+export interface MissionSummary {
+  completed: boolean;
+  remaining: number;
+  requiredReserve: number;
+}
+
+export function missionChecks(
+  model: FlightModel,
+  plan: Plan,
+  legs: readonly LegOutcome[],
+  mission: MissionSummary,
+): Check[] {
+  const tight = plan.settings.tightMargin;
+  const inputs: CheckInput[] = [];
+  const ac = plan.aircraft;
+  const tom = model.takeoffMass_kg;
+  inputs.push({
+    id: 'mtow',
+    label: 'Take-off mass',
+    legIndex: null,
+    value: tom,
+    limit: ac.mass.mtow_kg,
+    quantity: 'mass',
+    bound: 'max',
+    reference: 1,
+    detail: `Take-off mass ${fmt(tom)} kg against a maximum of ${fmt(ac.mass.mtow_kg)} kg.`,
+  });
+  const pp = ac.powerplant;
+  if (pp.type !== 'electric') {
+    const volume_L = pp.fuel.load_kg / fuelDensity_kg_L(pp.fuel);
+    inputs.push({
+      id: 'tank',
+      label: 'Fuel in the tanks',
+      legIndex: null,
+      value: volume_L * 1e-3,
+      limit: pp.fuel.tankCapacity_L * 1e-3,
+      quantity: 'volume',
+      bound: 'max',
+      reference: 1,
+      detail: `Fuel load ${fmt(volume_L)} L against a tank capacity of ${fmt(pp.fuel.tankCapacity_L)} L.`,
+    });
+  }
+  const fuel = model.consumable === 'fuel';
+  const unit = fuel ? 'kg' : 'J';
+  inputs.push({
+    id: 'reserve',
+    label: 'Reserve on landing',
+    legIndex: null,
+    value: mission.remaining,
+    limit: mission.requiredReserve,
+    quantity: fuel ? 'fuelMass' : 'energy',
+    bound: 'min',
+    reference: model.consumableStart,
+    fails: !mission.completed,
+    detail: mission.completed
+      ? `On landing ${fmt(mission.remaining)} ${unit} left against ${fmt(mission.requiredReserve)} ${unit} of reserve required.`
+      : `The mission is not completed; ${fmt(mission.remaining)} ${unit} left where it stops, ${fmt(mission.requiredReserve)} ${unit} of reserve required.`,
+  });
+  legs.forEach((o, i) => legChecks(inputs, plan, o, i));
+  if (!fuel) {
+    const soc = model.usableEnergy_J > 0 ? mission.remaining / model.usableEnergy_J : 0;
+    const floor = plan.reserves.socFloor;
+    inputs.push({
+      id: 'socFloor',
+      label: 'Battery floor',
+      legIndex: null,
+      value: soc,
+      limit: floor,
+      quantity: 'ratio',
+      bound: 'min',
+      reference: 1,
+      detail: `Lowest charge ${fmt(100 * soc)} % of usable energy against a floor of ${fmt(100 * floor)} %.`,
+    });
+  }
+  return inputs.map((c) => makeCheck(c, tight));
+}
+
+function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): void {
+  const leg = plan.legs[i];
+  if (!leg) return;
+  const name = legName(i, leg);
+  const c = o.checks;
+  const sf = plan.settings.stallFactor;
+  if (c.minStallRatio !== null) {
+    inputs.push({
+      id: `stall:${i}`,
+      label: `${name}: stall margin`,
+      legIndex: i,
+      value: c.minStallRatio,
+      limit: sf,
+      quantity: 'ratio',
+      bound: 'min',
+      reference: 1,
+      detail: `${name}: lowest airspeed ${fmt(c.minStallRatio)} × stall speed against ${sf}.`,
+    });
+  }
+  if (c.power !== null) {
+    inputs.push({
+      id: `power:${i}`,
+      label: `${name}: power`,
+      legIndex: i,
+      value: c.power.required_W,
+      limit: c.power.available_W,
+      quantity: 'power',
+      bound: 'max',
+      reference: Math.max(Math.abs(c.power.required_W), 1),
+      detail: `${name}: needs ${fmt(c.power.required_W)} W of thrust power where ${fmt(c.power.available_W)} W is available.`,
+    });
+  }
+  if (c.climb !== null) {
+    inputs.push({
+      id: `climb:${i}`,
+      label: `${name}: rate of climb`,
+      legIndex: i,
+      value: c.climb.min_m_s,
+      limit: c.climb.floor_m_s,
+      quantity: 'verticalSpeed',
+      bound: 'min',
+      reference: 1,
+      detail: `${name}: least rate of climb ${fmt(c.climb.min_m_s)} m/s against ${fmt(c.climb.floor_m_s)} m/s.`,
+    });
+  }
+  if (c.maxAltitude_m !== null) {
+    const ceiling = plan.aircraft.ceiling_m;
+    inputs.push({
+      id: `ceiling:${i}`,
+      label: `${name}: ceiling`,
+      legIndex: i,
+      value: c.maxAltitude_m,
+      limit: ceiling,
+      quantity: 'altitude',
+      bound: 'max',
+      reference: 1000,
+      detail: `${name}: highest altitude ${fmt(c.maxAltitude_m)} m against a ceiling of ${fmt(ceiling)} m.`,
+    });
+  }
+}
+
+/** Worst state among the checks; 'fails' when any leg failed. */
+export function verdictOf(checks: readonly Check[], anyLegFailed: boolean): CheckState {
+  if (anyLegFailed || checks.some((c) => c.state === 'fails')) return 'fails';
+  return checks.some((c) => c.state === 'tight') ? 'tight' : 'ok';
+}

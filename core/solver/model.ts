@@ -1,0 +1,128 @@
+/**
+ * The aircraft and the day as the mission solver sees them: polar coefficients, wing area,
+ * powerplant, the consumable (fuel kg or usable battery energy J) and the air at an altitude.
+ *
+ * Altitudes in a plan are above mean sea level on an altimeter set to QNH; the pressure
+ * altitude is then Hp = h + Hp(QNH) (common practice; the relation of core/atmosphere.ts
+ * `pressureAltitudeFromQnh`), and the air is the ISA+ΔT day at Hp (core/atmosphere.ts).
+ */
+import { atmosphereAt, densityAltitude, type AtmosphereState } from '../atmosphere.ts';
+import { toTas } from '../airspeed.ts';
+import { InputError } from '../errors.ts';
+import { polarCoefficients, type PolarCoefficients } from '../polar.ts';
+import type { FixedSpeed, Plan, Powerplant, Settings } from '../plan/schema.ts';
+import { pressureAltitudeFromPressure } from '../atmosphere.ts';
+import { consumableOf, usableEnergy_J } from '../propulsion/index.ts';
+import { G0 } from '../units.ts';
+import type { Consumable } from './types.ts';
+
+export interface Ambient {
+  h_m: number;
+  pressureAltitude_m: number;
+  atm: AtmosphereState;
+}
+
+export interface FlightModel {
+  readonly S_m2: number;
+  readonly polar: PolarCoefficients;
+  readonly pp: Powerplant;
+  readonly consumable: Consumable;
+  readonly isaOffset_K: number;
+  /** Hp − h for the plan's QNH. */
+  readonly pressureAltitudeOffset_m: number;
+  readonly settings: Settings;
+  /** CL used for the take-off/landing allowance speed: CLmaxFlaps when given. */
+  readonly CLmaxFlaps: number;
+  /** Fuel load (kg) or usable battery energy (J) at the start of the mission. */
+  readonly consumableStart: number;
+  /** Battery usable energy (J), 0 for fuel burners. */
+  readonly usableEnergy_J: number;
+  readonly takeoffMass_kg: number;
+  /** Last ambient evaluated (legs at one altitude ask for the same air many times). */
+  cache: Ambient | null;
+}
+
+export function buildModel(plan: Plan): FlightModel {
+  const ac = plan.aircraft;
+  const pp = ac.powerplant;
+  const consumable = consumableOf(pp);
+  const usable = pp.type === 'electric' ? usableEnergy_J(pp.battery) : 0;
+  const start = pp.type === 'electric' ? usable : pp.fuel.load_kg;
+  const carried = pp.type === 'electric' ? pp.battery.mass_kg : pp.fuel.load_kg;
+  return {
+    S_m2: ac.wingArea_m2,
+    polar: polarCoefficients(ac.polar),
+    pp,
+    consumable,
+    isaOffset_K: plan.environment.isaOffset_K,
+    pressureAltitudeOffset_m: pressureAltitudeFromPressure(
+      plan.environment.qnh_Pa,
+      'environment.qnh_Pa',
+    ),
+    settings: plan.settings,
+    CLmaxFlaps: ac.polar.CLmaxFlaps ?? ac.polar.CLmax,
+    consumableStart: start,
+    usableEnergy_J: usable,
+    takeoffMass_kg: ac.mass.empty_kg + ac.mass.payload_kg + carried,
+    cache: null,
+  };
+}
+
+/** The air at altitude h above mean sea level (cached for repeated altitudes). */
+export function ambientAt(model: FlightModel, h_m: number): Ambient {
+  const c = model.cache;
+  if (c !== null && c.h_m === h_m) return c;
+  const Hp = h_m + model.pressureAltitudeOffset_m;
+  const atm = atmosphereAt(Hp, model.isaOffset_K, {
+    altitude: 'pressureAltitude_m',
+    isaOffset: 'environment.isaOffset_K',
+  });
+  const amb = { h_m, pressureAltitude_m: Hp, atm };
+  model.cache = amb;
+  return amb;
+}
+
+/**
+ * The altitude (above MSL) where the density is rho on the plan's day: exact density
+ * altitude on a standard day, Newton on the pressure altitude otherwise (density falls
+ * monotonically with height in every layer for any ISA offset the plan allows).
+ */
+export function altitudeForDensity(model: FlightModel, rho_kg_m3: number): number {
+  const off = model.pressureAltitudeOffset_m;
+  let Hp = densityAltitude(rho_kg_m3, 'cruiseClimb.density_kg_m3');
+  if (model.isaOffset_K !== 0) {
+    for (let it = 0; it < 30; it++) {
+      const d = 0.5;
+      const r0 = atmosphereAt(Hp, model.isaOffset_K).rho_kg_m3;
+      const r1 = atmosphereAt(Hp + d, model.isaOffset_K).rho_kg_m3;
+      const step = ((rho_kg_m3 - r0) * d) / (r1 - r0);
+      if (!Number.isFinite(step)) {
+        throw new InputError(
+          'cruiseClimb.density_kg_m3',
+          rho_kg_m3,
+          'a density found in the atmosphere',
+        );
+      }
+      Hp += step;
+      if (Math.abs(step) < 1e-9) break;
+    }
+  }
+  return Hp - off;
+}
+
+/** TAS of a fixed airspeed (TAS, EAS, CAS or Mach) in this air. */
+export function fixedSpeedTas(speed: FixedSpeed, atm: AtmosphereState, field: string): number {
+  return speed.kind === 'mach'
+    ? toTas('mach', speed.mach, atm, field)
+    : toTas(speed.kind, speed.speed_m_s, atm, field);
+}
+
+/** Stall speed at this weight and air, with the clean CLmax (Anderson, Introduction to Flight, ch. 5). */
+export function stallTas(
+  model: FlightModel,
+  mass_kg: number,
+  atm: AtmosphereState,
+  CLmax = model.polar.CLmax,
+): number {
+  return Math.sqrt((2 * mass_kg * G0) / (atm.rho_kg_m3 * model.S_m2 * CLmax));
+}

@@ -1,0 +1,239 @@
+/**
+ * The quasi-steady flight condition at one point of a leg: airspeed from the leg's speed
+ * schedule, lift and drag from the polar, thrust power, consumption and vertical speed.
+ *
+ * Quasi-steady point-mass performance with L = W (small flight-path angles; Anderson,
+ * Introduction to Flight, ch. 6): CL = 2W/(ρV²S), D = ½ρV²S·CD(CL).
+ * Level flight: thrust power D·V. Climb at a throttle τ: ROC = (τ·P_avail − D·V)/W.
+ * Descent at a given rate: thrust power D·V − W·RoD (idle consumption below idle).
+ * Glide at idle: sink = V/(L/D). Cruise-climb: V and CL fixed, the density follows the weight,
+ * ρ = 2W/(V²·S·CL) (Anderson, Aircraft Performance and Design, ch. 5).
+ * Horizontal airspeed √(V² − ḣ²) enters the wind triangle.
+ */
+import type { FixedSpeed } from '../plan/schema.ts';
+import { dragCoefficient } from '../polar.ts';
+import { availableThrustPower_W, consumptionRate } from '../propulsion/index.ts';
+import { G0 } from '../units.ts';
+import {
+  altitudeForDensity,
+  ambientAt,
+  fixedSpeedTas,
+  type Ambient,
+  type FlightModel,
+} from './model.ts';
+import {
+  bestClimbTas,
+  bestEnduranceTas,
+  bestGlideTas,
+  bestRangeTas,
+  type SpeedChoice,
+  type SpeedContext,
+} from './speeds.ts';
+import { alongTrackSpeed } from './wind.ts';
+
+export type SpeedSchedule =
+  | { kind: 'fixed'; speed: FixedSpeed }
+  | { kind: 'constantCL'; CL: number }
+  | { kind: 'constantTas'; tas_m_s: number }
+  | { kind: 'bestRange' }
+  | { kind: 'bestEndurance' }
+  | { kind: 'bestClimb' }
+  | { kind: 'bestGlide' };
+
+export type VerticalMode =
+  | { kind: 'level' }
+  /** Constant TAS (the schedule) and CL; altitude follows the weight. */
+  | { kind: 'cruiseClimb'; CL: number }
+  | { kind: 'climb'; throttle: number }
+  | { kind: 'descent'; rate_m_s: number }
+  | { kind: 'glide' };
+
+export interface FlightPath {
+  speed: SpeedSchedule;
+  vertical: VerticalMode;
+  headwind_m_s: number;
+  crosswind_m_s: number;
+  /** Plan path of the leg's speed, for messages (e.g. `legs.3.speed`). */
+  field: string;
+}
+
+/** Steepest flight path the small-angle model is used for (sin γ). */
+export const MAX_SIN_GAMMA = 0.5;
+
+/** A condition the point model cannot represent; the leg stops with this message. */
+export class FlightLimit extends Error {
+  override readonly name = 'FlightLimit';
+}
+
+export interface Point {
+  h_m: number;
+  amb: Ambient;
+  tas_m_s: number;
+  /** Horizontal airspeed √(V² − ḣ²). */
+  horizontal_m_s: number;
+  /** Ground speed along the course; ≤ 0 when the wind cannot be beaten. */
+  groundSpeed_m_s: number;
+  CL: number;
+  CD: number;
+  drag_N: number;
+  /** Thrust power the engine delivers (may be ≤ 0 in a descent: idle). */
+  thrustPower_W: number;
+  /** Power the flight path needs: D·V in level flight, D·V ± W·ḣ on a slope. */
+  powerRequired_W: number;
+  powerAvailable_W: number;
+  /** Fuel kg/s (fuel burners) or battery drain W (electric). */
+  rate: number;
+  /** Vertical speed ḣ, + up. */
+  climb_m_s: number;
+  /** V/V_stall = √(CLmax/CL). */
+  stallRatio: number;
+  speedLimitedBy: SpeedChoice['limitedBy'];
+  /** The climb was steeper than MAX_SIN_GAMMA allows at full throttle; less power is used. */
+  climbCapped: boolean;
+}
+
+export function newPoint(model: FlightModel, h_m: number): Point {
+  return {
+    h_m,
+    amb: ambientAt(model, h_m),
+    tas_m_s: 0,
+    horizontal_m_s: 0,
+    groundSpeed_m_s: 0,
+    CL: 0,
+    CD: 0,
+    drag_N: 0,
+    thrustPower_W: 0,
+    powerRequired_W: 0,
+    powerAvailable_W: 0,
+    rate: 0,
+    climb_m_s: 0,
+    stallRatio: 0,
+    speedLimitedBy: null,
+    climbCapped: false,
+  };
+}
+
+/** Warm start of the speed searches along one leg. */
+export interface ScheduleMemo {
+  guess_m_s?: number;
+}
+
+function scheduleTas(
+  model: FlightModel,
+  path: FlightPath,
+  mass_kg: number,
+  amb: Ambient,
+  memo: ScheduleMemo,
+  out: Point,
+): number {
+  const s = path.speed;
+  out.speedLimitedBy = null;
+  switch (s.kind) {
+    case 'fixed':
+      return fixedSpeedTas(s.speed, amb.atm, path.field);
+    case 'constantTas':
+      return s.tas_m_s;
+    case 'constantCL':
+      return Math.sqrt((2 * mass_kg * G0) / (amb.atm.rho_kg_m3 * model.S_m2 * s.CL));
+  }
+  const ctx: SpeedContext = {
+    model,
+    mass_kg,
+    amb,
+    headwind_m_s: path.headwind_m_s,
+    crosswind_m_s: path.crosswind_m_s,
+    guess_m_s: memo.guess_m_s,
+  };
+  let choice: SpeedChoice;
+  if (s.kind === 'bestRange') choice = bestRangeTas(ctx);
+  else if (s.kind === 'bestEndurance') choice = bestEnduranceTas(ctx);
+  else if (s.kind === 'bestGlide') choice = bestGlideTas(ctx);
+  else choice = bestClimbTas(ctx, path.vertical.kind === 'climb' ? path.vertical.throttle : 1);
+  if (choice.limitedBy === null) memo.guess_m_s = choice.optimum_m_s;
+  out.speedLimitedBy = choice.limitedBy;
+  return choice.tas_m_s;
+}
+
+/** Evaluates the flight condition at (mass, altitude) into `out`. */
+export function evaluatePoint(
+  model: FlightModel,
+  path: FlightPath,
+  mass_kg: number,
+  h_m: number,
+  memo: ScheduleMemo,
+  out: Point,
+): Point {
+  const W = mass_kg * G0;
+  const S = model.S_m2;
+  const v = path.vertical;
+  if (!(mass_kg > 0)) throw new FlightLimit(`the mass fell to ${mass_kg} kg`);
+  let h = h_m;
+  if (v.kind === 'cruiseClimb' && path.speed.kind === 'constantTas') {
+    const V0 = path.speed.tas_m_s;
+    h = altitudeForDensity(model, (2 * W) / (V0 * V0 * S * v.CL));
+  }
+  const amb = ambientAt(model, h);
+  const V = scheduleTas(model, path, mass_kg, amb, memo, out);
+  if (!(V > 0 && V < amb.atm.a_m_s)) {
+    throw new FlightLimit(
+      `the airspeed ${fmt(V)} m/s is outside the subsonic range at ${fmt(h)} m`,
+    );
+  }
+  const q = 0.5 * amb.atm.rho_kg_m3 * V * V;
+  const CL = W / (q * S);
+  const CD = dragCoefficient(model.polar, CL);
+  const D = q * S * CD;
+  const pp = model.pp;
+  const avail = availableThrustPower_W(pp, amb.atm, amb.pressureAltitude_m, V);
+  let climb = 0;
+  let thrust = D * V;
+  let required = D * V;
+  out.climbCapped = false;
+  if (v.kind === 'climb') {
+    thrust = v.throttle * avail;
+    climb = (thrust - D * V) / W;
+    if (climb > MAX_SIN_GAMMA * V) {
+      climb = MAX_SIN_GAMMA * V;
+      thrust = D * V + W * climb;
+      out.climbCapped = true;
+    }
+    required = thrust;
+  } else if (v.kind === 'descent') {
+    if (v.rate_m_s >= MAX_SIN_GAMMA * V) {
+      throw new FlightLimit(
+        `a descent rate of ${fmt(v.rate_m_s)} m/s is steeper than 30° at ${fmt(V)} m/s airspeed`,
+      );
+    }
+    climb = -v.rate_m_s;
+    required = D * V - W * v.rate_m_s;
+    thrust = required;
+  } else if (v.kind === 'glide') {
+    climb = -(D * V) / W;
+    required = 0;
+    thrust = 0;
+  }
+  const horizontal = Math.sqrt(V * V - climb * climb);
+  out.h_m = h;
+  out.amb = amb;
+  out.tas_m_s = V;
+  out.horizontal_m_s = horizontal;
+  out.groundSpeed_m_s = alongTrackSpeed(horizontal, path.headwind_m_s, path.crosswind_m_s);
+  out.CL = CL;
+  out.CD = CD;
+  out.drag_N = D;
+  out.thrustPower_W = thrust;
+  out.powerRequired_W = required;
+  out.powerAvailable_W = avail;
+  out.rate = consumptionRate(pp, thrust, V, amb.atm, amb.pressureAltitude_m);
+  out.climb_m_s = climb;
+  out.stallRatio = Math.sqrt(model.polar.CLmax / CL);
+  return out;
+}
+
+/** Numbers in messages: 4 significant digits, no exponent for everyday magnitudes. */
+export function fmt(v: number): string {
+  if (!Number.isFinite(v)) return String(v);
+  const a = Math.abs(v);
+  if (a >= 1e4 && a < 1e9) return String(Math.round(v));
+  return String(Number(v.toPrecision(4)));
+}

@@ -1,0 +1,78 @@
+/**
+ * What a segment remembers of its flight for the leg result and the checks: spans of CL and
+ * L/D, the least stall margin, the largest and the tightest power, the least rate of climb,
+ * the highest altitude, and where a best-speed schedule had to leave its optimum.
+ */
+import type { Point } from './point.ts';
+
+export interface SegmentStats {
+  CLmin: number;
+  CLmax: number;
+  LDmin: number;
+  LDmax: number;
+  minStallRatio: number;
+  /** Largest power required and the power available at that point. */
+  maxPowerRequired_W: number;
+  powerAvailableAtMax_W: number;
+  /** Point of least relative power margin. */
+  worstPowerMargin: number;
+  worstPowerRequired_W: number;
+  worstPowerAvailable_W: number;
+  minClimb_m_s: number;
+  maxAltitude_m: number;
+  startTas_m_s: number;
+  /** First point where a best-speed schedule was moved off its optimum, and why. */
+  limitedSpeed: { tas_m_s: number; by: 'stall' | 'power' | 'mach' } | null;
+  climbCapped: boolean;
+}
+
+export function emptyStats(): SegmentStats {
+  return {
+    CLmin: Infinity,
+    CLmax: -Infinity,
+    LDmin: Infinity,
+    LDmax: -Infinity,
+    minStallRatio: Infinity,
+    maxPowerRequired_W: -Infinity,
+    powerAvailableAtMax_W: 0,
+    worstPowerMargin: Infinity,
+    worstPowerRequired_W: 0,
+    worstPowerAvailable_W: 0,
+    minClimb_m_s: Infinity,
+    maxAltitude_m: -Infinity,
+    startTas_m_s: 0,
+    limitedSpeed: null,
+    climbCapped: false,
+  };
+}
+
+export function record(stats: SegmentStats, p: Point): void {
+  const LD = p.CL / p.CD;
+  stats.CLmin = Math.min(stats.CLmin, p.CL);
+  stats.CLmax = Math.max(stats.CLmax, p.CL);
+  stats.LDmin = Math.min(stats.LDmin, LD);
+  stats.LDmax = Math.max(stats.LDmax, LD);
+  stats.minStallRatio = Math.min(stats.minStallRatio, p.stallRatio);
+  if (p.powerRequired_W > stats.maxPowerRequired_W) {
+    stats.maxPowerRequired_W = p.powerRequired_W;
+    stats.powerAvailableAtMax_W = p.powerAvailable_W;
+  }
+  const margin = powerMargin(p);
+  if (margin < stats.worstPowerMargin) {
+    stats.worstPowerMargin = margin;
+    stats.worstPowerRequired_W = p.powerRequired_W;
+    stats.worstPowerAvailable_W = p.powerAvailable_W;
+  }
+  stats.minClimb_m_s = Math.min(stats.minClimb_m_s, p.climb_m_s);
+  stats.maxAltitude_m = Math.max(stats.maxAltitude_m, p.h_m);
+  if (stats.limitedSpeed === null && p.speedLimitedBy !== null) {
+    stats.limitedSpeed = { tas_m_s: p.tas_m_s, by: p.speedLimitedBy };
+  }
+  if (p.climbCapped) stats.climbCapped = true;
+}
+
+/** (available − required)/available; with nothing available, −1 if anything is required. */
+export function powerMargin(p: Point): number {
+  if (p.powerAvailable_W > 0) return (p.powerAvailable_W - p.powerRequired_W) / p.powerAvailable_W;
+  return p.powerRequired_W > 0 ? -1 : 0;
+}

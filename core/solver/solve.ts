@@ -1,0 +1,239 @@
+/**
+ * The mission solver: flies the plan's legs in order from the departure elevation with the
+ * take-off mass and the full consumable, then works out the reserve required on landing and
+ * the feasibility checks. A leg that cannot be flown stops the mission there (the result
+ * keeps everything up to that point; later legs are 'notReached'). Never throws for a plan
+ * that passed PlanSchema; every number in the result is finite (guard.ts).
+ */
+import { InputError } from '../errors.ts';
+import type { LoiterLeg, Plan } from '../plan/schema.ts';
+import { consumableOf } from '../propulsion/index.ts';
+import { missionChecks, verdictOf } from './checks.ts';
+import { guardResult } from './guard.ts';
+import { baseResult, legName, type LegContext } from './legs/common.ts';
+import { flyLeg, type LegOutcome } from './legs/index.ts';
+import { searchLoiterConsumption } from './loiterReserve.ts';
+import { buildModel, type FlightModel } from './model.ts';
+import { fmt } from './point.ts';
+import { requiredReserves } from './reserves.ts';
+import type { MissionState } from './segment.ts';
+import type { LegResult, PlanResult } from './types.ts';
+
+export interface SolveOptions {
+  /** Chart samples per flight leg (default 24, at least 2). */
+  samplesPerLeg?: number;
+}
+
+export const DEFAULT_SAMPLES_PER_LEG = 24;
+
+/** Largest samplesPerLeg accepted (a chart needs far fewer; this bounds the result's size). */
+export const MAX_SAMPLES_PER_LEG = 10_000;
+
+/**
+ * Solves the plan. Throws InputError only for bad `options`; for any plan that passed
+ * PlanSchema it returns a result (infeasible legs come back as failures).
+ */
+export function solvePlan(plan: Plan, options: SolveOptions = {}): PlanResult {
+  const samples = options.samplesPerLeg ?? DEFAULT_SAMPLES_PER_LEG;
+  if (!Number.isInteger(samples) || samples < 2 || samples > MAX_SAMPLES_PER_LEG) {
+    throw new InputError('samplesPerLeg', samples, `an integer from 2 to ${MAX_SAMPLES_PER_LEG}`);
+  }
+  try {
+    return guardResult(solveMission(plan, samples));
+  } catch (e) {
+    return guardResult(crashedResult(plan, e));
+  }
+}
+
+interface Flown {
+  outcomes: LegOutcome[];
+  end: MissionState;
+  failedAt: number | null;
+  warnings: string[];
+}
+
+function isUntilReserve(leg: Plan['legs'][number]): leg is LoiterLeg {
+  return leg.kind === 'loiter' && leg.end.by === 'reserve';
+}
+
+/**
+ * Flies legs[from..] from `state`. In a trial (samples 0) every "until reserve" loiter is
+ * flown for nothing: the loiter being searched for takes all the spare.
+ */
+function flyLegs(
+  model: FlightModel,
+  plan: Plan,
+  from: number,
+  state: MissionState,
+  samples: number,
+): Flown {
+  const outcomes: LegOutcome[] = [];
+  const warnings: string[] = [];
+  let s = state;
+  for (let i = from; i < plan.legs.length; i++) {
+    const leg = plan.legs[i]!;
+    const ctx: LegContext = { model, index: i, samples };
+    let consume = 0;
+    if (isUntilReserve(leg) && samples > 0) {
+      const found = searchUntilReserve(model, plan, i, s);
+      consume = found.consume;
+      if (found.status === 'none') {
+        warnings.push(
+          `${legName(i, leg)}: no loiter is possible: the rest of the plan and the reserve already need more than is on board.`,
+        );
+      }
+    }
+    const o = flyLeg(ctx, leg, s, consume);
+    outcomes.push(o);
+    warnings.push(...o.warnings);
+    s = o.end;
+    if (o.failed) return { outcomes, end: s, failedAt: i, warnings };
+  }
+  return { outcomes, end: s, failedAt: null, warnings };
+}
+
+function searchUntilReserve(model: FlightModel, plan: Plan, index: number, start: MissionState) {
+  const leg = plan.legs[index]!;
+  const surplus = (c: number): number | null => {
+    const loiter = flyLeg({ model, index, samples: 0 }, leg, start, c);
+    if (loiter.failed) return null;
+    const rest = flyLegs(model, plan, index + 1, loiter.end, 0);
+    if (rest.failedAt !== null) return null;
+    const trip = model.consumableStart - rest.end.left;
+    return rest.end.left - requiredReserves(model, plan.reserves, rest.end, trip).required.total;
+  };
+  const scale = Math.max(model.consumableStart, 1e-300);
+  return searchLoiterConsumption(
+    surplus,
+    Math.max(start.left, 0),
+    1 + plan.reserves.contingencyFraction,
+    1e-10 * scale,
+  );
+}
+
+function solveMission(plan: Plan, samples: number): PlanResult {
+  const model = buildModel(plan);
+  const env = plan.environment;
+  const start: MissionState = {
+    t_s: 0,
+    x_m: 0,
+    air_m: 0,
+    h_m: env.departureElevation_m,
+    mass_kg: model.takeoffMass_kg,
+    left: model.consumableStart,
+  };
+  const flown = flyLegs(model, plan, 0, start, samples);
+  const end = flown.end;
+  const completed = flown.failedAt === null;
+  const legs: LegResult[] = flown.outcomes.map((o) => o.result);
+  for (let i = legs.length; i < plan.legs.length; i++) {
+    legs.push(
+      baseResult({ model, index: i, samples }, plan.legs[i]!, end, end, 'notReached', null),
+    );
+  }
+  const trip = model.consumableStart - end.left;
+  const reserve = requiredReserves(model, plan.reserves, end, trip);
+  const total = reserve.required.total;
+  const warnings = [...flown.warnings, ...reserve.warnings];
+  if (completed && Math.abs(end.h_m - env.arrivalElevation_m) > 1) {
+    warnings.push(
+      `The mission ends at ${fmt(end.h_m)} m, not at the arrival elevation ${fmt(env.arrivalElevation_m)} m.`,
+    );
+  }
+  const checks = missionChecks(model, plan, flown.outcomes, {
+    completed,
+    remaining: end.left,
+    requiredReserve: total,
+  });
+  const fuel = model.consumable === 'fuel';
+  const startAmount = model.consumableStart;
+  const fraction = startAmount > 0 ? end.left / startAmount : 0;
+  const reserveRef = Math.max(total, 1e-6 * (startAmount > 1e-9 ? startAmount : 1));
+  const failedLeg = flown.failedAt === null ? null : flown.outcomes[flown.failedAt];
+  return {
+    consumable: model.consumable,
+    legs,
+    completed,
+    failure:
+      flown.failedAt === null
+        ? null
+        : { legIndex: flown.failedAt, message: failedLeg?.result.error ?? 'leg failed' },
+    takeoffMass_kg: model.takeoffMass_kg,
+    totals: {
+      time_s: end.t_s,
+      groundDistance_m: end.x_m,
+      airDistance_m: end.air_m,
+      fuelUsed_kg: fuel ? trip : 0,
+      energyUsed_J: fuel ? 0 : trip,
+    },
+    landing: {
+      remaining: end.left,
+      fractionOfStart: fraction,
+      soc: !fuel && model.usableEnergy_J > 0 ? end.left / model.usableEnergy_J : fraction,
+    },
+    reserve: {
+      required: reserve.required,
+      kept: completed && reserve.computed && end.left >= total,
+      margin: (end.left - total) / reserveRef,
+    },
+    checks,
+    verdict: verdictOf(checks, !completed),
+    warnings,
+  };
+}
+
+/** A result for a plan the solver could not even start on (an internal error). */
+function crashedResult(plan: Plan, e: unknown): PlanResult {
+  const message = `internal: the solver stopped (${e instanceof Error ? e.message : String(e)})`;
+  let consumable: PlanResult['consumable'] = 'fuel';
+  try {
+    consumable = consumableOf(plan.aircraft.powerplant);
+  } catch {
+    // keep 'fuel'
+  }
+  const zero = { t_s: 0, x_m: 0, h_m: 0, mass_kg: 0, fuel_kg: 0, energy_J: 0 };
+  const legs: LegResult[] = (plan.legs ?? []).map((leg, index) => ({
+    index,
+    id: leg.id,
+    kind: leg.kind,
+    label: leg.label ?? '',
+    status: index === 0 ? 'failed' : 'notReached',
+    error: index === 0 ? message : null,
+    start: { ...zero },
+    end: { ...zero },
+    time_s: 0,
+    groundDistance_m: 0,
+    airDistance_m: 0,
+    fuelUsed_kg: 0,
+    energyUsed_J: 0,
+    meanTas_m_s: 0,
+    meanGroundSpeed_m_s: 0,
+    CL: { min: 0, max: 0 },
+    LD: { min: 0, max: 0 },
+    minStallRatio: 0,
+    powerRequired_W: 0,
+    powerAvailable_W: 0,
+    headwind_m_s: 0,
+    crosswind_m_s: 0,
+    heading_deg: 0,
+    steps: 0,
+    series: { t_s: [], x_m: [], h_m: [], mass_kg: [], fuel_kg: [], energy_J: [], tas_m_s: [] },
+  }));
+  return {
+    consumable,
+    legs,
+    completed: false,
+    failure: { legIndex: 0, message },
+    takeoffMass_kg: 0,
+    totals: { time_s: 0, groundDistance_m: 0, airDistance_m: 0, fuelUsed_kg: 0, energyUsed_J: 0 },
+    landing: { remaining: 0, fractionOfStart: 0, soc: 0 },
+    reserve: {
+      required: { contingency: 0, alternate: 0, hold: 0, floor: 0, total: 0 },
+      kept: false,
+      margin: 0,
+    },
+    checks: [],
+    verdict: 'fails',
+    warnings: [],
+  };
+}

@@ -1,0 +1,185 @@
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../../core/errors.ts';
+import { fuelDensity_kg_L } from '../../../core/propulsion/index.ts';
+import { guardResult } from '../../../core/solver/guard.ts';
+import { solvePlan } from '../../../core/solver/solve.ts';
+import type { PlanResult } from '../../../core/solver/types.ts';
+import { G0 } from '../../../core/units.ts';
+import {
+  ANDERSON_PROP,
+  climb,
+  cruise,
+  electricPowerplant,
+  landing,
+  makePlan,
+  numbersIn,
+  propPowerplant,
+  rel,
+} from './fixtures.ts';
+
+const check = (r: PlanResult, id: string) => r.checks.find((c) => c.id === id);
+const allFinite = (r: PlanResult) => numbersIn(r).every(([, v]) => Number.isFinite(v));
+
+describe('feasibility checks, each broken on purpose', () => {
+  it('overweight: take-off mass above MTOW fails the mtow check (the legs are still flown)', () => {
+    const m0 = ANDERSON_PROP.W0_N / G0;
+    const r = solvePlan(
+      makePlan('propeller', [cruise()], {
+        aircraft: (a) => ({ ...a, mass: { ...a.mass, mtow_kg: 1200 } }),
+      }),
+    );
+    const c = check(r, 'mtow')!;
+    expect(c.state).toBe('fails');
+    expect(rel(c.value, m0)).toBeLessThan(1e-12);
+    expect(rel(c.margin, (1200 - m0) / 1200)).toBeLessThan(1e-12); // margin definition (types.ts)
+    expect(r.completed).toBe(true);
+    expect(r.verdict).toBe('fails');
+  });
+
+  it('a take-off mass within 10 % of MTOW is tight', () => {
+    const m0 = ANDERSON_PROP.W0_N / G0;
+    const r = solvePlan(
+      makePlan('propeller', [cruise()], {
+        aircraft: (a) => ({ ...a, mass: { ...a.mass, mtow_kg: m0 * 1.05 } }),
+      }),
+    );
+    expect(check(r, 'mtow')!.state).toBe('tight');
+  });
+
+  it('fuel over the tank capacity fails the tank check (volume by the fuel density)', () => {
+    const pp = propPowerplant({ fuel: { kind: 'avgas', load_kg: 166, tankCapacity_L: 200 } });
+    const r = solvePlan(makePlan('propeller', [cruise()], { powerplant: pp }));
+    const c = check(r, 'tank')!;
+    expect(c.state).toBe('fails');
+    expect(c.quantity).toBe('volume');
+    expect(
+      rel(
+        c.value,
+        (166 / fuelDensity_kg_L({ kind: 'avgas', load_kg: 166, tankCapacity_L: 200 })) * 1e-3,
+      ),
+    ).toBeLessThan(1e-12);
+    expect(c.limit).toBeCloseTo(0.2, 12);
+  });
+
+  it('a reserve not kept fails the reserve check', () => {
+    const r = solvePlan(
+      makePlan('propeller', [cruise({ end: { by: 'distance', distance_m: 1_500_000 } })], {
+        reserves: { holdTime_s: 6 * 3600 },
+      }),
+    );
+    expect(r.completed).toBe(true);
+    expect(r.reserve.kept).toBe(false);
+    expect(check(r, 'reserve')!.state).toBe('fails');
+    expect(r.verdict).toBe('fails');
+  });
+
+  it('a fixed speed below the stall margin fails the leg, naming the speed and the limit', () => {
+    // V_stall = √(2·13127.5/(1.225·16.165·2)) = 25.75 m/s at sea level; 1.2·V_stall = 30.9 m/s.
+    const r = solvePlan(
+      makePlan('propeller', [
+        cruise({ speed: { kind: 'tas', speed_m_s: 30 } }),
+        landing({ by: 'fuel', fuel_kg: 1 }),
+      ]),
+    );
+    expect(r.legs[0]!.status).toBe('failed');
+    expect(r.legs[0]!.error).toMatch(
+      /airspeed 30 m\/s is below 1\.2 × stall speed \(30\.9\d* m\/s\)/,
+    );
+    expect(r.legs[1]!.status).toBe('notReached');
+    expect(r.failure?.legIndex).toBe(0);
+    expect(check(r, 'stall:0')!.state).toBe('fails');
+    expect(allFinite(r)).toBe(true);
+  });
+
+  it('a power shortfall fails the leg, naming power required and available', () => {
+    const r = solvePlan(
+      makePlan('propeller', [cruise({ speed: { kind: 'tas', speed_m_s: 100 } })]),
+    );
+    expect(r.legs[0]!.status).toBe('failed');
+    expect(r.legs[0]!.error).toMatch(/needs \d+ W of thrust power but only \d+ W is available/);
+    expect(check(r, 'power:0')!.state).toBe('fails');
+    expect(r.verdict).toBe('fails');
+  });
+
+  it('climbing above the aircraft ceiling fails the ceiling check', () => {
+    const r = solvePlan(makePlan('propeller', [climb({ toAltitude_m: 5500 })]));
+    expect(r.legs[0]!.status).toBe('flown');
+    const c = check(r, 'ceiling:0')!;
+    expect(c.state).toBe('fails');
+    expect(c.value).toBeCloseTo(5500, 6);
+    expect(check(r, 'climb:0')!.quantity).toBe('verticalSpeed');
+  });
+
+  it('going below the battery floor fails the socFloor check', () => {
+    const r = solvePlan(
+      makePlan('electric', [cruise({ end: { by: 'distance', distance_m: 20_000 } })], {
+        reserves: { socFloor: 0.9 },
+      }),
+    );
+    const c = check(r, 'socFloor')!;
+    expect(c.state).toBe('fails');
+    expect(c.value).toBeLessThan(0.9);
+    expect(rel(c.value, r.landing.soc)).toBeLessThan(1e-12);
+  });
+
+  it('fuel exhausted mid-leg: the leg fails there and the result holds everything up to it', () => {
+    const r = solvePlan(
+      makePlan('propeller', [
+        cruise({ end: { by: 'distance', distance_m: 5_000_000 } }),
+        landing({ by: 'fuel', fuel_kg: 1 }),
+      ]),
+    );
+    const leg = r.legs[0]!;
+    expect(leg.status).toBe('failed');
+    expect(leg.error).toMatch(/fuel exhausted after \d+ m of 5000000 m/);
+    expect(leg.end.fuel_kg).toBeGreaterThanOrEqual(0);
+    expect(leg.end.fuel_kg).toBeLessThan(1e-6);
+    expect(leg.groundDistance_m).toBeGreaterThan(1e6);
+    expect(leg.groundDistance_m).toBeLessThan(5e6);
+    expect(r.totals.groundDistance_m).toBe(leg.groundDistance_m);
+    expect(leg.series.x_m.at(-1)).toBe(leg.end.x_m);
+    expect(r.legs[1]!.status).toBe('notReached');
+    expect(r.completed).toBe(false);
+    expect(allFinite(r)).toBe(true);
+  });
+
+  it('a cruise by fuel asking for more than is on board flies until empty and fails', () => {
+    const r = solvePlan(makePlan('propeller', [cruise({ end: { by: 'fuel', fuel_kg: 500 } })]));
+    expect(r.legs[0]!.status).toBe('failed');
+    expect(r.legs[0]!.end.fuel_kg).toBe(0);
+    expect(r.failure?.message).toMatch(/asks for 500 kg/);
+  });
+
+  it('a battery exhausted mid-leg reports the battery', () => {
+    const r = solvePlan(
+      makePlan('electric', [cruise({ end: { by: 'distance', distance_m: 500_000 } })], {
+        powerplant: electricPowerplant(),
+      }),
+    );
+    expect(r.legs[0]!.error).toMatch(/usable battery energy exhausted/);
+    expect(r.landing.remaining).toBeGreaterThanOrEqual(0);
+  });
+});
+
+describe('the finiteness guard', () => {
+  it('replaces a non-finite number by 0 and turns it into a plan failure', () => {
+    const r = solvePlan(makePlan('propeller', [cruise()]));
+    r.legs[0]!.series.h_m[3] = Number.NaN;
+    r.totals.time_s = Infinity;
+    const g = guardResult(r);
+    expect(g.legs[0]!.series.h_m[3]).toBe(0);
+    expect(g.totals.time_s).toBe(0);
+    expect(g.completed).toBe(false);
+    expect(g.verdict).toBe('fails');
+    expect(g.failure?.message).toMatch(
+      /^internal: a non-finite number at legs\[0\]\.series\.h_m\[3\]/,
+    );
+    expect(g.warnings.some((w) => w.startsWith('internal'))).toBe(true);
+  });
+
+  it('bad options are refused with InputError (plans never are)', () => {
+    const plan = makePlan('propeller', [cruise()]);
+    expect(() => solvePlan(plan, { samplesPerLeg: 1 })).toThrow(InputError);
+    expect(() => solvePlan(plan, { samplesPerLeg: 2.5 })).toThrow(/samplesPerLeg/);
+  });
+});
