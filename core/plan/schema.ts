@@ -109,6 +109,14 @@ export const ElectricSchema = z.object({
 
 export const PowerplantSchema = z.discriminatedUnion('type', [JetSchema, PropellerSchema, ElectricSchema]);
 
+/** Aircraft data for field performance. */
+export const FieldDataSchema = z.object({
+  /** Lift coefficient during the ground run (attitude on the wheels; 0.3 common practice). */
+  CLground: bounded(0, 1.5),
+  /** Propeller diameter for the static-thrust estimate (propeller and electric aircraft). */
+  propDiameter_m: bounded(0.05, 6, 'm').optional(),
+});
+
 export const AircraftSchema = z.object({
   name: z.string().min(1).max(120),
   wingArea_m2: bounded(0.01, 1000, 'm²'),
@@ -122,6 +130,8 @@ export const AircraftSchema = z.object({
   /** Absolute operating ceiling the operator may not exceed (approved or chosen limit). */
   ceiling_m: bounded(0, 20_000, 'm'),
   powerplant: PowerplantSchema,
+  /** Optional: needed only for take-off and landing distances. */
+  field: FieldDataSchema.optional(),
 });
 
 export const EnvironmentSchema = z.object({
@@ -153,6 +163,61 @@ export const SettingsSchema = z.object({
   tightMargin: fraction(0, 0.5),
   /** Rate of climb that defines the service ceiling (0.5 m/s common practice). */
   minClimbRate_m_s: bounded(0, 10, 'm/s'),
+});
+
+/** Runway surface; friction coefficients in core/field/surfaces.ts (common practice). */
+export const SurfaceSchema = z.enum(['dryHard', 'wetHard', 'shortDryGrass', 'longGrass', 'softGround']);
+
+/** A runway at the departure or arrival field. Elevation comes from `environment`. */
+export const RunwaySchema = z.object({
+  by: z.literal('runway'),
+  available_m: bounded(1, 10_000, 'm'),
+  surface: SurfaceSchema,
+  /** Rise over run in the direction of the roll; + uphill. */
+  slope: bounded(-0.1, 0.1),
+  /** Magnetic or true runway direction in degrees, the same reference as the surface wind. */
+  heading_deg: angle_deg(),
+  surfaceWind: WindSchema,
+  /** Outside air temperature at the field; if absent, ISA + environment.isaOffset_K. */
+  temperature_K: bounded(200, 340, 'K').optional(),
+});
+
+/** Hand or catapult launch of a UAV: a speed check instead of a ground roll. */
+export const LaunchSchema = z.object({
+  by: z.literal('launch'),
+  /** Ground speed at release (hand throw, or the catapult's end speed). */
+  releaseSpeed_m_s: bounded(0, 80, 'm/s', true),
+  /** Headwind at the launch point. */
+  headwind_m_s: bounded(-20, 30, 'm/s'),
+  catapultStroke_m: bounded(0, 50, 'm').optional(),
+});
+
+/** Recovery without a runway (net, parachute, belly landing on a field): no distance check. */
+export const NoRunwaySchema = z.object({ by: z.literal('none') });
+
+export const AirfieldSchema = z.object({
+  departure: z.discriminatedUnion('by', [RunwaySchema, LaunchSchema, NoRunwaySchema]),
+  arrival: z.discriminatedUnion('by', [RunwaySchema, NoRunwaySchema]),
+  /** Take-off distance to 15 m × factor must fit the runway (1.15 common practice). */
+  takeoffFactor: bounded(1, 2),
+  /** Landing distance from 15 m × factor must fit the runway (1.43 = 1/0.7, common practice). */
+  landingFactor: bounded(1, 2.5),
+  /** Release airspeed must be at least this × stall speed (1.15 common practice). */
+  launchFactor: bounded(1, 1.5),
+});
+
+/** Spreads (one standard deviation) of the uncertain inputs for the reserve Monte Carlo. */
+export const UncertaintySchema = z.object({
+  windSpeed_m_s: bounded(0, 20, 'm/s'),
+  windDirection_deg: bounded(0, 90, 'deg'),
+  /** Relative spreads (0.05 = 5 %). */
+  cd0: fraction(0, 0.5),
+  efficiency: fraction(0, 0.3),
+  fuelConsumption: fraction(0, 0.3),
+  batteryCapacity: fraction(0, 0.5),
+  payload_kg: bounded(0, 10_000, 'kg'),
+  samples: z.number().int().min(100).max(20_000),
+  seed: z.number().int().min(0).max(2 ** 31 - 1),
 });
 
 /** A fixed airspeed: TAS, EAS or CAS in m/s, or a Mach number. */
@@ -249,6 +314,10 @@ export const PlanSchema = z.object({
   reserves: ReservePolicySchema,
   settings: SettingsSchema,
   legs: z.array(LegSchema).min(1).max(200),
+  /** Optional: runway or launch checks at departure and arrival. */
+  airfield: AirfieldSchema.optional(),
+  /** Optional: spreads for the reserve Monte Carlo (defaults from common practice if absent). */
+  uncertainty: UncertaintySchema.optional(),
 });
 
 export type Plan = z.infer<typeof PlanSchema>;
@@ -274,3 +343,9 @@ export type CruiseLeg = z.infer<typeof CruiseLegSchema>;
 export type LoiterLeg = z.infer<typeof LoiterLegSchema>;
 export type DescentLeg = z.infer<typeof DescentLegSchema>;
 export type Allowance = z.infer<typeof Allowance>;
+export type Airfield = z.infer<typeof AirfieldSchema>;
+export type Runway = z.infer<typeof RunwaySchema>;
+export type Launch = z.infer<typeof LaunchSchema>;
+export type FieldData = z.infer<typeof FieldDataSchema>;
+export type Uncertainty = z.infer<typeof UncertaintySchema>;
+export type Surface = z.infer<typeof SurfaceSchema>;
