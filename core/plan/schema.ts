@@ -134,6 +134,37 @@ export const AircraftSchema = z.object({
   field: FieldDataSchema.optional(),
 });
 
+/** One level of a winds-aloft forecast; values between levels are interpolated as vectors. */
+export const WindLevelSchema = z.object({
+  altitude_m: bounded(-1000, 30_000, 'm'),
+  from_deg: angle_deg(),
+  speed_m_s: bounded(0, 150, 'm/s'),
+  /** Temperature at this level as an offset from ISA; if absent, environment.isaOffset_K. */
+  isaOffset_K: bounded(-80, 60, 'K').optional(),
+});
+
+export const WaypointSchema = z.object({
+  id: z.string().min(1).max(64),
+  name: z.string().max(120).default(''),
+  lat_deg: bounded(-90, 90, 'deg'),
+  lon_deg: bounded(-180, 180, 'deg'),
+  altitude_m: bounded(-1000, 30_000, 'm').optional(),
+  /** East positive; overrides the route's variation at this waypoint. */
+  magneticVariation_deg: bounded(-180, 180, 'deg').optional(),
+});
+
+export const RouteSchema = z.object({
+  waypoints: z
+    .array(WaypointSchema)
+    .min(2)
+    .max(5000)
+    .refine((w) => new Set(w.map((p) => p.id)).size === w.length, {
+      error: 'waypoint ids must be unique',
+    }),
+  /** East positive (common practice: magnetic = true − east variation). */
+  magneticVariation_deg: bounded(-180, 180, 'deg'),
+});
+
 export const EnvironmentSchema = z.object({
   /** Temperature offset from ISA, applied at every pressure altitude. */
   isaOffset_K: bounded(-60, 50, 'K'),
@@ -141,6 +172,15 @@ export const EnvironmentSchema = z.object({
   qnh_Pa: bounded(87_000, 108_500, 'Pa'),
   departureElevation_m: bounded(-400, 5_000, 'm'),
   arrivalElevation_m: bounded(-400, 5_000, 'm'),
+  /** Optional winds-aloft table used by legs whose windSource is 'aloft'. */
+  windsAloft: z
+    .array(WindLevelSchema)
+    .min(1)
+    .max(100)
+    .refine((l) => new Set(l.map((x) => x.altitude_m)).size === l.length, {
+      error: 'wind levels must have distinct altitudes',
+    })
+    .optional(),
 });
 
 export const ReservePolicySchema = z.object({
@@ -241,7 +281,14 @@ const legBase = {
   id: z.string().min(1).max(64),
   label: z.string().max(120).default(''),
 };
-const track = { course_deg: angle_deg(), wind: WindSchema };
+const track = {
+  course_deg: angle_deg(),
+  wind: WindSchema,
+  /** 'leg' (default): the leg's own wind; 'aloft': the winds-aloft table at each altitude flown. */
+  windSource: z.enum(['leg', 'aloft']).optional(),
+  /** With a plan route: the waypoint this leg flies to; course and distance come from the route. */
+  toWaypoint: z.string().min(1).max(64).optional(),
+};
 
 export const TakeoffLegSchema = z.object({ kind: z.literal('takeoff'), ...legBase, allowance: Allowance });
 export const LandingLegSchema = z.object({ kind: z.literal('landing'), ...legBase, allowance: Allowance });
@@ -314,6 +361,8 @@ export const PlanSchema = z.object({
   reserves: ReservePolicySchema,
   settings: SettingsSchema,
   legs: z.array(LegSchema).min(1).max(200),
+  /** Optional: the route as waypoints; legs with `toWaypoint` take course and distance from it. */
+  route: RouteSchema.optional(),
   /** Optional: runway or launch checks at departure and arrival. */
   airfield: AirfieldSchema.optional(),
   /** Optional: spreads for the reserve Monte Carlo (defaults from common practice if absent). */
@@ -349,3 +398,6 @@ export type Launch = z.infer<typeof LaunchSchema>;
 export type FieldData = z.infer<typeof FieldDataSchema>;
 export type Uncertainty = z.infer<typeof UncertaintySchema>;
 export type Surface = z.infer<typeof SurfaceSchema>;
+export type Route = z.infer<typeof RouteSchema>;
+export type WaypointData = z.infer<typeof WaypointSchema>;
+export type WindLevelData = z.infer<typeof WindLevelSchema>;
