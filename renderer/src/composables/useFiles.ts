@@ -1,0 +1,252 @@
+/**
+ * New, open, save, CSV export, printed report and crash insurance. Inside the desktop
+ * shell these go through `window.legwise` (dialogs, atomic writes, PDF); in a plain browser
+ * they fall back to a file picker, downloads, localStorage and the print dialog.
+ */
+import { nextTick, ref, watch, type Ref } from 'vue';
+import { newPlan } from '../../../core/plan/defaults.ts';
+import { parsePlanText, serializePlan, type PlanIssue } from '../../../core/plan/load.ts';
+import type { Plan } from '../../../core/plan/schema.ts';
+import type { MenuCommand } from '../../../electron/contract.ts';
+import type { PlanStore } from './usePlan.ts';
+import type { ResultStore } from './useResult.ts';
+import type { Units } from './useUnits.ts';
+import { buildLegCsv, fileStem } from '../support/csv.ts';
+import { readSetting, writeSetting } from '../support/settingsStore.ts';
+
+export interface FileActions {
+  /** One line on what the last action did (shown in the status area). */
+  status: Ref<string>;
+  /** Problems of a plan file that could not be opened. */
+  openIssues: Ref<PlanIssue[]>;
+  /** A plan autosaved by an earlier session, offered back. */
+  recovered: Ref<Plan | null>;
+  newPlan(): Promise<void>;
+  open(): Promise<void>;
+  save(as?: boolean): Promise<void>;
+  exportCsv(): Promise<void>;
+  printReport(): Promise<void>;
+  restoreRecovered(): void;
+  discardRecovered(): Promise<void>;
+  /** Starts autosave and menu handling; returns a stop function. */
+  start(): () => void;
+}
+
+const AUTOSAVE_KEY = 'autosave';
+/**
+ * Sent on window before and after printing: the report is built only for paper (it repeats
+ * the table and draws the profile as an image, which would cost time on every keystroke).
+ */
+export const PREPARE_PRINT_EVENT = 'legwise:prepare-print';
+export const PRINT_DONE_EVENT = 'legwise:print-done';
+const AUTOSAVE_DELAY_MS = 2000;
+
+function download(text: string, fileName: string, type: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type }));
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = fileName;
+  a.rel = 'noopener';
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
+
+function pickFileText(): Promise<{ name: string; text: string } | null> {
+  return new Promise((resolve) => {
+    const input = document.createElement('input');
+    input.type = 'file';
+    input.accept = '.json,application/json';
+    input.addEventListener('change', () => {
+      const file = input.files?.[0];
+      if (!file) return resolve(null);
+      file.text().then(
+        (text) => resolve({ name: file.name, text }),
+        () => resolve(null),
+      );
+    });
+    input.addEventListener('cancel', () => resolve(null));
+    input.click();
+  });
+}
+
+export function createFileActions(plan: PlanStore, result: ResultStore, units: Units): FileActions {
+  const api = window.legwise;
+  const status = ref('');
+  const openIssues = ref<PlanIssue[]>([]);
+  const recovered = ref<Plan | null>(null);
+
+  const ensureValid = (what: string): Plan | null => {
+    if (plan.valid.value) return plan.lastValid.value;
+    status.value = `Cannot ${what}: fix the marked fields first.`;
+    return null;
+  };
+
+  const opened = (p: Plan, where: string) => {
+    plan.load(p);
+    openIssues.value = [];
+    status.value = `Opened ${where}.`;
+  };
+
+  async function newPlanAction(): Promise<void> {
+    if (api) {
+      const r = await api.newPlan();
+      if (!r.ok) return void (r.code !== 'CANCELLED' && (status.value = r.message));
+    }
+    plan.load(newPlan());
+    status.value = 'New plan.';
+  }
+
+  async function open(): Promise<void> {
+    if (api) {
+      const r = await api.openPlan();
+      if (r.ok) return opened(r.plan, r.filePath);
+      if (r.code === 'CANCELLED') return;
+      openIssues.value = r.issues ?? [];
+      status.value = r.message;
+      return;
+    }
+    const picked = await pickFileText();
+    if (!picked) return;
+    const loaded = parsePlanText(picked.text);
+    if (loaded.ok) opened(loaded.plan, picked.name);
+    else {
+      openIssues.value = loaded.issues;
+      status.value = `${picked.name} is not a plan this version can open.`;
+    }
+  }
+
+  async function save(as = false): Promise<void> {
+    const p = ensureValid('save');
+    if (!p) return;
+    if (api) {
+      const r = as ? await api.savePlanAs(p) : await api.savePlan(p);
+      if (r.ok) {
+        plan.markSaved();
+        status.value = `Saved to ${r.filePath}.`;
+      } else if (r.code !== 'CANCELLED') status.value = r.message;
+      return;
+    }
+    download(serializePlan(p), `${fileStem(p.name)}.legwise.json`, 'application/json');
+    plan.markSaved();
+    status.value = 'Plan downloaded.';
+  }
+
+  async function exportCsv(): Promise<void> {
+    const r = result.result.value;
+    if (!r) return void (status.value = 'Nothing to export yet.');
+    const text = buildLegCsv(plan.lastValid.value, r, units.system.value);
+    const name = `${fileStem(plan.lastValid.value.name)}.csv`;
+    if (api) {
+      const out = await api.exportCsv({ text, suggestedName: name });
+      if (out.ok) status.value = `Table saved to ${out.filePath}.`;
+      else if (out.code !== 'CANCELLED') status.value = out.message;
+      return;
+    }
+    download(text, name, 'text/csv');
+    status.value = 'Table downloaded as CSV.';
+  }
+
+  async function printReport(): Promise<void> {
+    const name = `${fileStem(plan.lastValid.value.name)}.pdf`;
+    // The shell prints to PDF without a beforeprint event, and window.print() blocks before
+    // Vue could render on beforeprint: build the report first in both cases.
+    window.dispatchEvent(new Event(PREPARE_PRINT_EVENT));
+    await nextTick();
+    try {
+      if (api) {
+        const out = await api.exportPdf({ suggestedName: name });
+        if (out.ok) status.value = `Report saved to ${out.filePath}.`;
+        else if (out.code !== 'CANCELLED') status.value = out.message;
+      } else window.print();
+    } finally {
+      window.dispatchEvent(new Event(PRINT_DONE_EVENT));
+    }
+  }
+
+  function restoreRecovered(): void {
+    if (recovered.value) plan.load(recovered.value, { unsaved: true });
+    recovered.value = null;
+    status.value = 'Autosaved plan restored.';
+  }
+
+  async function discardRecovered(): Promise<void> {
+    recovered.value = null;
+    if (api) await api.discardAutosave();
+    else writeSetting(AUTOSAVE_KEY, null);
+  }
+
+  async function lookForAutosave(): Promise<void> {
+    if (api) {
+      const r = await api.recoverAutosave();
+      if (r.ok && r.recovered) recovered.value = r.recovered.plan;
+      return;
+    }
+    const text = readSetting(AUTOSAVE_KEY);
+    if (!text) return;
+    const loaded = parsePlanText(text);
+    if (loaded.ok && serializePlan(loaded.plan) !== serializePlan(plan.lastValid.value))
+      recovered.value = loaded.plan;
+  }
+
+  function onMenu(command: MenuCommand): void {
+    const run: Record<MenuCommand['kind'], () => Promise<void>> = {
+      new: newPlanAction,
+      open,
+      save: () => save(false),
+      saveAs: () => save(true),
+      exportPdf: printReport,
+      exportCsv,
+      openRecent: async () => {
+        if (!api || command.kind !== 'openRecent') return;
+        const r = await api.openRecent(command.filePath);
+        if (r.ok) opened(r.plan, r.filePath);
+        else status.value = r.message;
+      },
+    };
+    void run[command.kind]();
+  }
+
+  function start(): () => void {
+    void lookForAutosave();
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const stopAutosave = watch(plan.draft, () => {
+      clearTimeout(timer);
+      timer = setTimeout(() => {
+        if (!plan.dirty.value || recovered.value) return;
+        const p = plan.lastValid.value;
+        if (api) void api.autosave(p);
+        else writeSetting(AUTOSAVE_KEY, serializePlan(p));
+      }, AUTOSAVE_DELAY_MS);
+    });
+    const stopDirty = api
+      ? watch(
+          [plan.dirty, () => plan.draft.value.name],
+          ([dirty, name]) => void api.setDirty({ dirty, name: String(name).slice(0, 200) }),
+          { immediate: true },
+        )
+      : () => undefined;
+    const stopMenu = api ? api.onMenuCommand(onMenu) : () => undefined;
+    return () => {
+      clearTimeout(timer);
+      stopAutosave();
+      stopDirty();
+      stopMenu();
+    };
+  }
+
+  return {
+    status,
+    openIssues,
+    recovered,
+    newPlan: newPlanAction,
+    open,
+    save,
+    exportCsv,
+    printReport,
+    restoreRecovered,
+    discardRecovered,
+    start,
+  };
+}

@@ -1,0 +1,36 @@
+/**
+ * Wires the shared state of the planner screen: the plan with its history, the unit
+ * system, the live result and the optimizers run on demand. Created once by App.vue and provided to every component.
+ */
+import { provide } from 'vue';
+import type { Plan } from '../../../core/plan/schema.ts';
+import type { UnitSystemId } from '../../../core/units.ts';
+import { createPlanStore, PLAN_KEY, type PlanStore } from './usePlan.ts';
+import { createResultStore, RESULT_KEY, type ResultStore } from './useResult.ts';
+import { createUnits, UNITS_KEY, type Units } from './useUnits.ts';
+import { createTune, TUNE_KEY, type Tune } from './useTune.ts';
+
+export interface Planner {
+  plan: PlanStore;
+  result: ResultStore;
+  units: Units;
+  tune: Tune;
+}
+
+export function createPlanner(initial: Plan, system: UnitSystemId = 'si'): Planner {
+  const plan = createPlanStore(initial);
+  return {
+    plan,
+    result: createResultStore(plan.lastValid, plan.valid),
+    units: createUnits(system),
+    tune: createTune(plan),
+  };
+}
+
+/** Makes the planner available to `usePlan()`, `useResult()` and `useUnits()` below. */
+export function providePlanner(planner: Planner): void {
+  provide(PLAN_KEY, planner.plan);
+  provide(RESULT_KEY, planner.result);
+  provide(UNITS_KEY, planner.units);
+  provide(TUNE_KEY, planner.tune);
+}

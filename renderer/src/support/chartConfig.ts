@@ -1,0 +1,148 @@
+/**
+ * ChartSpec → chart.js configuration (scatter charts with lines: both axes numeric).
+ * Animation is off so that what is drawn is final at once — steady for tests, screenshots
+ * and printing — and drawing needs no GPU (canvas 2D).
+ */
+import type { ChartData, ChartOptions, ScatterDataPoint } from 'chart.js';
+import type { ChartSpec, Series, SeriesRole } from './chartSpec.ts';
+
+export interface ChartColors {
+  text: string;
+  grid: string;
+  line: string;
+  line2: string;
+  points: string;
+  mark: string;
+  fail: string;
+  /** Heavier lines in the high-contrast theme. */
+  width: number;
+}
+
+export const NORMAL_COLORS: ChartColors = {
+  text: '#1d2430',
+  grid: '#d5dae2',
+  line: '#1f5fbf',
+  line2: '#b35900',
+  points: '#111827',
+  mark: '#6b7280',
+  fail: '#b3261e',
+  width: 2,
+};
+
+export const CONTRAST_COLORS: ChartColors = {
+  text: '#000000',
+  grid: '#8a8a8a',
+  line: '#000000',
+  line2: '#0038b8',
+  points: '#000000',
+  mark: '#333333',
+  fail: '#c00000',
+  width: 3,
+};
+
+const MARK_COLORS = ['#7c3aed', '#0f766e', '#9d174d', '#4b5563'];
+
+function colorOf(role: SeriesRole, colors: ChartColors, markIndex: number): string {
+  if (role === 'mark')
+    return colors === CONTRAST_COLORS
+      ? colors.mark
+      : (MARK_COLORS[markIndex % MARK_COLORS.length] ?? colors.mark);
+  return colors[
+    role === 'line' ? 'line' : role === 'line2' ? 'line2' : role === 'points' ? 'points' : 'fail'
+  ];
+}
+
+function dataset(s: Series, colors: ChartColors, markIndex: number) {
+  const color = colorOf(s.role, colors, markIndex);
+  const isPoints = s.role === 'points';
+  return {
+    label: s.label,
+    data: s.points as ScatterDataPoint[],
+    yAxisID: s.axis,
+    showLine: !isPoints,
+    borderColor: color,
+    backgroundColor: color,
+    borderWidth: s.role === 'fail' ? colors.width + 2 : s.role === 'mark' ? 1.5 : colors.width,
+    borderDash:
+      s.role === 'mark' ? [6, 4] : s.role === 'line2' && colors === CONTRAST_COLORS ? [8, 3] : [],
+    // One radius per dataset, never per point: chart.js then shares the resolved options
+    // among all points, which keeps an update cheap.
+    pointRadius: isPoints ? 4 : 0,
+    pointHoverRadius: isPoints ? 7 : 4,
+    pointStyle: isPoints ? ('rectRot' as const) : ('circle' as const),
+    tension: 0,
+    order: isPoints || s.role === 'fail' ? 0 : 1,
+  };
+}
+
+export function chartData(spec: ChartSpec, colors: ChartColors): ChartData<'scatter'> {
+  let marks = 0;
+  return {
+    datasets: spec.series.map((s) => dataset(s, colors, s.role === 'mark' ? marks++ : 0)),
+  };
+}
+
+export function chartOptions(
+  spec: ChartSpec,
+  colors: ChartColors,
+  responsive = true,
+): ChartOptions<'scatter'> {
+  const axisTitle = (text: string) => ({
+    display: true,
+    text,
+    color: colors.text,
+    font: { size: 12, weight: 'bold' as const },
+  });
+  const ticks = { color: colors.text, font: { size: 11 } };
+  const hasY2 = spec.series.some((s) => s.axis === 'y2');
+  return {
+    animation: false,
+    responsive,
+    maintainAspectRatio: false,
+    normalized: true,
+    // Points are given as {x, y} already: no parsing pass on every update.
+    parsing: false,
+    interaction: { mode: 'nearest', intersect: false },
+    scales: {
+      x: {
+        type: 'linear',
+        beginAtZero: spec.xFromZero ?? false,
+        title: axisTitle(spec.xTitle),
+        ticks,
+        grid: { color: colors.grid },
+      },
+      y: {
+        type: 'linear',
+        beginAtZero: spec.beginAtZero ?? false,
+        title: axisTitle(spec.yTitle),
+        ticks,
+        grid: { color: colors.grid },
+      },
+      y2: {
+        type: 'linear',
+        display: hasY2,
+        position: 'right',
+        beginAtZero: spec.beginAtZero ?? hasY2,
+        title: axisTitle(spec.y2Title ?? ''),
+        ticks,
+        grid: { drawOnChartArea: false },
+      },
+    },
+    plugins: {
+      legend: { position: 'top', labels: { color: colors.text, boxWidth: 14, font: { size: 12 } } },
+      tooltip: { enabled: responsive },
+    },
+  };
+}
+
+/** The parts of a spec that shape its options (titles, axes), as a key for reuse. */
+export function optionsKey(spec: ChartSpec): string {
+  return JSON.stringify([
+    spec.xTitle,
+    spec.yTitle,
+    spec.y2Title,
+    spec.beginAtZero,
+    spec.xFromZero,
+    spec.series.some((s) => s.axis === 'y2'),
+  ]);
+}

@@ -1,0 +1,60 @@
+/**
+ * How a leg is named on screen and in exports: its own label, or its kind and position.
+ */
+import type { Leg } from '../../../core/plan/schema.ts';
+import { formatNumber } from '../../../core/format.ts';
+import { LEG_KIND_NAMES } from './legFields.ts';
+
+export function legTitle(leg: Pick<Leg, 'kind' | 'label'>, index: number): string {
+  const label = leg.label?.trim();
+  return label ? label : `${LEG_KIND_NAMES[leg.kind]} ${index + 1}`;
+}
+
+type Fmt = (
+  value_si: number,
+  quantity: 'altitude' | 'distance' | 'time' | 'fuelMass' | 'energy' | 'airspeed',
+) => string;
+
+/** One line on what the leg does, e.g. "to 1500 m, best rate" or "120.0 km at best range". */
+export function legSummary(leg: Leg, fmt: Fmt): string {
+  switch (leg.kind) {
+    case 'takeoff':
+    case 'landing': {
+      const a = leg.allowance;
+      if (a.by === 'fuel') return `allowance ${fmt(a.fuel_kg, 'fuelMass')}`;
+      if (a.by === 'energy') return `allowance ${fmt(a.energy_J, 'energy')}`;
+      if (a.by === 'time') return `allowance ${fmt(a.time_s, 'time')} at full power`;
+      return `allowance ${formatNumber(a.fraction * 100, 1)} % of mass`;
+    }
+    case 'climb':
+      return `to ${fmt(leg.toAltitude_m, 'altitude')}, ${speedText(leg.speed, fmt)}`;
+    case 'cruise': {
+      const end =
+        leg.end.by === 'distance'
+          ? fmt(leg.end.distance_m, 'distance')
+          : leg.end.by === 'fuel'
+            ? `${fmt(leg.end.fuel_kg, 'fuelMass')} fuel`
+            : `${fmt(leg.end.energy_J, 'energy')}`;
+      return `${end} at ${speedText(leg.speed, fmt)}${leg.program === 'cruiseClimb' ? ', cruise-climb' : ''}`;
+    }
+    case 'loiter':
+      return `${leg.end.by === 'time' ? fmt(leg.end.time_s, 'time') : 'until reserve'} at ${speedText(leg.speed, fmt)}`;
+    case 'descent':
+      return `to ${fmt(leg.toAltitude_m, 'altitude')}, ${leg.mode.by === 'glide' ? 'glide' : speedText(leg.mode.speed, fmt)}`;
+  }
+}
+
+function speedText(speed: { kind: string; speed_m_s?: number; mach?: number }, fmt: Fmt): string {
+  switch (speed.kind) {
+    case 'bestRate':
+      return 'best rate';
+    case 'bestRange':
+      return 'best range';
+    case 'bestEndurance':
+      return 'best endurance';
+    case 'mach':
+      return `Mach ${formatNumber(speed.mach ?? Number.NaN, 2)}`;
+    default:
+      return `${fmt(speed.speed_m_s ?? Number.NaN, 'airspeed')} ${speed.kind.toUpperCase()}`;
+  }
+}

@@ -1,0 +1,6 @@
+/** Fixed wording shown on screen and in the printed report. */
+export const CAUTION =
+  "Planning estimates only — the aircraft's approved documents, local regulations and licensed practice take precedence.";
+
+export const CHECK_STATE_WORDS = { ok: 'OK', tight: 'Tight', fails: 'Fails' } as const;
+export const CHECK_STATE_MARKS = { ok: '✓', tight: '!', fails: '✗' } as const;

@@ -1,0 +1,87 @@
+/**
+ * Builds the planner page with Vite, serves the build on 127.0.0.1 at a free port and opens
+ * it in headless Chromium (playwright-core, system Chromium, no GPU). Shared by the browser
+ * tests and scripts/measure-ui.ts.
+ */
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { build, preview, type PreviewServer } from 'vite';
+import { chromium, type Browser, type Page } from 'playwright-core';
+
+export const CHROMIUM_PATH = '/usr/bin/chromium';
+export const haveChromium = existsSync(CHROMIUM_PATH);
+
+const root = fileURLToPath(new URL('../../', import.meta.url));
+const configFile = fileURLToPath(new URL('../../vite.config.ts', import.meta.url));
+
+export interface PlannerPage {
+  browser: Browser;
+  page: Page;
+  url: string;
+  close(): Promise<void>;
+}
+
+export const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--no-first-run',
+  '--disable-sync',
+  '--disable-quic',
+];
+
+/** `vite build` of renderer/ into a separate folder so a running dev build is not disturbed. */
+export async function buildPage(outDir = 'artifacts/page'): Promise<string> {
+  const out = fileURLToPath(new URL(`../../${outDir}/`, import.meta.url));
+  await build({
+    configFile,
+    root: `${root}renderer`,
+    logLevel: 'warn',
+    build: { outDir: out, emptyOutDir: true },
+  });
+  return out;
+}
+
+export async function servePage(outDir: string): Promise<PreviewServer> {
+  return preview({
+    configFile,
+    root: `${root}renderer`,
+    logLevel: 'warn',
+    build: { outDir },
+    preview: { host: '127.0.0.1', port: 0, strictPort: false, open: false },
+  });
+}
+
+export async function openPlanner(
+  options: { width?: number; height?: number } = {},
+): Promise<PlannerPage> {
+  if (!haveChromium) throw new Error(`Chromium not found at ${CHROMIUM_PATH}`);
+  const outDir = await buildPage();
+  const server = await servePage(outDir);
+  const url = server.resolvedUrls?.local[0];
+  if (!url) throw new Error('vite preview did not report a local URL');
+  const browser = await chromium.launch({
+    executablePath: CHROMIUM_PATH,
+    args: CHROMIUM_ARGS,
+    headless: true,
+  });
+  const context = await browser.newContext({
+    viewport: { width: options.width ?? 1280, height: options.height ?? 800 },
+    deviceScaleFactor: 1,
+    acceptDownloads: true,
+  });
+  const page = await context.newPage();
+  return {
+    browser,
+    page,
+    url,
+    close: async () => {
+      await browser.close();
+      await new Promise<void>((resolve, reject) =>
+        server.httpServer.close((e) => (e ? reject(e) : resolve())),
+      );
+    },
+  };
+}
