@@ -20,6 +20,8 @@ export interface OutputOptions {
   units: UnitSystemId;
   json: boolean;
   csv: boolean;
+  /** solve: also run the reserve Monte Carlo. */
+  monteCarlo?: boolean;
 }
 
 /** Exit codes: 0 solved and feasible, 1 solved but the verdict fails, 2 bad file or usage. */

@@ -14,6 +14,7 @@ import { solvePlan } from '../core/solver/solve.ts';
 import type { UnitSystemId } from '../core/units.ts';
 import { CAUTION, EXIT_FAILS, EXIT_OK, EXIT_USAGE } from './common.ts';
 import type { CliIo, OutputOptions } from './common.ts';
+import { renderMonteCarloText, runMonteCarlo } from './monteCarloReport.ts';
 import { mergeWarnings, renderSolveCsv, renderSolveJson, renderSolveText } from './solveReport.ts';
 import { renderTuneJson, renderTuneText, runTune } from './tuneReport.ts';
 
@@ -31,6 +32,9 @@ Options
   --units si|aviation  units for printed values (default si; aviation = ft, NM, kt, lb)
   --json               machine-readable output (solve, tune, check)
   --csv                per-leg table as CSV (solve)
+  --monte-carlo        solve: also simulate the flight many times with uncertain wind,
+                       drag, efficiency, consumption and payload (the plan's uncertainty
+                       block, or defaults) and say how often the reserve is kept
   -h, --help           this text
   -v, --version        the Legwise version
 
@@ -98,9 +102,13 @@ function runSolve(path: string, opts: OutputOptions, io: CliIo): number {
   const { plan } = loaded;
   const result = solvePlan(plan);
   const warnings = mergeWarnings(loaded.warnings, result);
-  if (opts.json) io.stdout(renderSolveJson(plan, result, warnings));
+  const mc = opts.monteCarlo ? runMonteCarlo(plan) : null;
+  if (opts.json) io.stdout(renderSolveJson(plan, result, warnings, mc));
   else if (opts.csv) io.stdout(renderSolveCsv(result, opts.units));
-  else io.stdout(renderSolveText(plan, result, warnings, opts.units));
+  else {
+    const extra = mc ? renderMonteCarloText(mc, opts.units) : '';
+    io.stdout(renderSolveText(plan, result, warnings, opts.units, extra));
+  }
   return result.verdict === 'fails' || !result.completed ? EXIT_FAILS : EXIT_OK;
 }
 
@@ -131,6 +139,7 @@ export function runCli(argv: readonly string[], io: CliIo): number {
         units: { type: 'string' },
         json: { type: 'boolean' },
         csv: { type: 'boolean' },
+        'monte-carlo': { type: 'boolean' },
         help: { type: 'boolean', short: 'h' },
         version: { type: 'boolean', short: 'v' },
       },
@@ -159,10 +168,14 @@ export function runCli(argv: readonly string[], io: CliIo): number {
   if (values.csv && (values.json || command !== 'solve')) {
     return usageError(io, '--csv: only with solve, and not together with --json');
   }
+  if (values['monte-carlo'] && (values.csv || command !== 'solve')) {
+    return usageError(io, '--monte-carlo: only with solve, and not together with --csv');
+  }
   const opts: OutputOptions = {
     units: units as UnitSystemId,
     json: values.json ?? false,
     csv: values.csv ?? false,
+    monteCarlo: values['monte-carlo'] ?? false,
   };
   try {
     return COMMANDS[command as keyof typeof COMMANDS](file, opts, io);

@@ -11,7 +11,9 @@ import {
   unitLabel,
 } from '../core/format.ts';
 import type { Plan } from '../core/plan/schema.ts';
-import type { Check, CheckState, LegResult, PlanResult, Span } from '../core/solver/types.ts';
+import { checkAmount, describeCheck } from '../core/solver/describe.ts';
+import type { CheckState, LegResult, PlanResult, Span } from '../core/solver/types.ts';
+import type { ReserveMonteCarloResult } from '../core/uncertainty/reserveMonteCarlo.ts';
 import type { Quantity, UnitSystemId } from '../core/units.ts';
 import { UNIT_SYSTEMS } from '../core/units.ts';
 import { CAUTION } from './common.ts';
@@ -104,22 +106,8 @@ export function totalsRow(result: PlanResult, units: UnitSystemId): string[] {
   ];
 }
 
-const CHECK_QUANTITY: Record<Check['quantity'], Quantity | null> = {
-  mass: 'mass',
-  fuelMass: 'fuelMass',
-  energy: 'energy',
-  power: 'power',
-  altitude: 'altitude',
-  verticalSpeed: 'verticalSpeed',
-  volume: 'fuelVolume',
-  ratio: null,
-};
-
 /** A check's value or limit in the chosen units (ratios as plain numbers). */
-export function checkAmount(check: Check, v: number, units: UnitSystemId): string {
-  const q = CHECK_QUANTITY[check.quantity];
-  return q === null ? formatSignificant(v, 3) : formatQuantity(v, q, units);
-}
+export { checkAmount } from '../core/solver/describe.ts';
 
 const STATE_WORD: Record<CheckState, string> = { ok: 'ok', tight: 'TIGHT', fails: 'FAILS' };
 
@@ -129,7 +117,7 @@ function checkRows(result: PlanResult, units: UnitSystemId): string[][] {
     c.label,
     `${checkAmount(c, c.value, units)} / ${checkAmount(c, c.limit, units)}`,
     formatQuantity(c.margin, 'ratio', units, { signed: true }),
-    c.detail,
+    describeCheck(c, units),
   ]);
 }
 
@@ -152,6 +140,8 @@ export function renderSolveText(
   result: PlanResult,
   warnings: readonly string[],
   units: UnitSystemId,
+  /** A section printed before the caution (the Monte Carlo of `--monte-carlo`). */
+  extra = '',
 ): string {
   const lines: string[] = [];
   const c = consumableQuantity(result);
@@ -192,6 +182,10 @@ export function renderSolveText(
     lines.push('');
     lines.push('Warnings');
     for (const w of warnings) lines.push(`  - ${w}`);
+  }
+  if (extra !== '') {
+    lines.push('');
+    lines.push(extra.trimEnd());
   }
   lines.push('');
   lines.push(CAUTION);
@@ -254,12 +248,19 @@ export function renderSolveCsv(result: PlanResult, units: UnitSystemId): string 
   return `${lines.join('\n')}\n`;
 }
 
-/** The full result plus the caution and the merged warnings, as JSON. */
+/** The full result plus the caution and the merged warnings (and the Monte Carlo), as JSON. */
 export function renderSolveJson(
   plan: Plan,
   result: PlanResult,
   warnings: readonly string[],
+  monteCarlo: ReserveMonteCarloResult | null = null,
 ): string {
-  const out = { caution: CAUTION, plan: plan.name, ...result, warnings: [...warnings] };
+  const out = {
+    caution: CAUTION,
+    plan: plan.name,
+    ...result,
+    warnings: [...warnings],
+    ...(monteCarlo ? { monteCarlo } : {}),
+  };
   return `${JSON.stringify(out, null, 2)}\n`;
 }

@@ -7,9 +7,12 @@
  *     leg flown by the solver vs Breguet's cruise-climb range (Anderson, Introduction to
  *     Flight, ch. 6), with their agreement and the ODE steps per leg.
  *  4. Optimizer times on the same plan.
+ *  5. Every example plan solved with the default ('precise') and the 'fast' tolerance, so a
+ *     powerplant whose solve is out of line shows up (median per solve).
+ *  6. The reserve Monte Carlo: 2000 samples of the 12-leg plan (target ≤ 1 s).
  * Timings use performance.now(); they depend on the machine and are printed, never asserted.
  */
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { rangeJetCruiseClimb } from '../core/breguet.ts';
 import { bestCruiseAltitude } from '../core/optimize/altitudeSweep.ts';
@@ -26,10 +29,14 @@ import { dragCoefficient, polarCoefficients } from '../core/polar.ts';
 import { flyLeg } from '../core/solver/legs/index.ts';
 import { ambientAt, buildModel } from '../core/solver/model.ts';
 import { solvePlan } from '../core/solver/solve.ts';
+import { reserveMonteCarlo } from '../core/uncertainty/reserveMonteCarlo.ts';
+import { spreadsFromDefaults } from '../core/uncertainty/spreads.ts';
 import { G0 } from '../core/units.ts';
 
 const TARGET_SOLVE_MS = 2;
 const TARGET_SWEEP_MS = 150;
+const TARGET_MONTE_CARLO_MS = 1000;
+const MONTE_CARLO_SAMPLES = 2000;
 
 function stats(samples: number[]): { median: number; p90: number; min: number } {
   const s = [...samples].sort((a, b) => a - b);
@@ -314,6 +321,50 @@ function benchOptimizers(plan: Plan): void {
   }
 }
 
+function benchExamples(): void {
+  const dir = fileURLToPath(new URL('../examples/', import.meta.url));
+  const files = existsSync(dir) ? readdirSync(dir).filter((f) => f.endsWith('.json')) : [];
+  console.log(
+    '5. Example plans: median solve time, precise and fast tolerance (100 runs after 30)',
+  );
+  for (const file of files.sort()) {
+    const loaded = parsePlanText(readFileSync(`${dir}${file}`, 'utf8'));
+    if (!loaded.ok) {
+      console.log(`   ${file.padEnd(28)} does not load`);
+      continue;
+    }
+    const plan = loaded.plan;
+    const cells = (['precise', 'fast'] as const).map((tolerance) => {
+      const solve = () => solvePlan(plan, { tolerance });
+      time(solve, 30);
+      return `${tolerance} ${ms(stats(time(solve, 100)).median)}`;
+    });
+    const kind = plan.aircraft.powerplant.type;
+    console.log(`   ${file.padEnd(28)} ${kind.padEnd(10)} ${cells.join(', ')}`);
+  }
+}
+
+function benchMonteCarlo(plan: Plan, source: string): void {
+  const spreads = spreadsFromDefaults(plan);
+  const run = () => reserveMonteCarlo(plan, spreads, { samples: MONTE_CARLO_SAMPLES, seed: 1 });
+  reserveMonteCarlo(plan, spreads, { samples: 200, seed: 2 }); // warm-up
+  let last = run();
+  const s = stats(
+    time(() => {
+      last = run();
+    }, 3),
+  );
+  console.log(
+    `6. Reserve Monte Carlo of ${source}: ${MONTE_CARLO_SAMPLES} samples ('fast' tolerance), 3 runs after a warm-up`,
+  );
+  console.log(
+    `   median ${ms(s.median)}, min ${ms(s.min)}   target ≤ ${TARGET_MONTE_CARLO_MS} ms: ${verdict(s.median <= TARGET_MONTE_CARLO_MS)}`,
+  );
+  console.log(
+    `   reserve not kept in ${(100 * last.probabilityReserveNotKept).toFixed(1)} % of samples; ${(MONTE_CARLO_SAMPLES / (s.median / 1000)).toFixed(0)} solves per second`,
+  );
+}
+
 function main(): void {
   const { plan, source } = loadTwelveLegs();
   console.log(`Legwise benchmark — Node ${process.version}, ${process.platform}/${process.arch}\n`);
@@ -321,6 +372,8 @@ function main(): void {
   benchSweep(plan);
   benchClosedForm();
   benchOptimizers(plan);
+  benchExamples();
+  benchMonteCarlo(plan, source);
 }
 
 main();

@@ -9,7 +9,7 @@
 import { InputError, requireFinite } from '../errors.ts';
 import type { CruiseLeg, LoiterLeg, Plan } from '../plan/schema.ts';
 import { flyLeg } from '../solver/legs/index.ts';
-import { buildModel } from '../solver/model.ts';
+import { buildModel, type SolveTolerance } from '../solver/model.ts';
 import type { MissionState } from '../solver/segment.ts';
 import type { Consumable } from '../solver/types.ts';
 import { clonePlan, requireLeg, solveForSearch } from './planTools.ts';
@@ -33,11 +33,20 @@ const MAX_TAS_M_S = 400;
 const MIN_ALTITUDE_M = -400;
 const MAX_ALTITUDE_M = 20_000;
 
+export interface SweepOptions {
+  /**
+   * Integration accuracy of each leg flown: 'precise' (default, as solvePlan) or 'fast'
+   * (relative tolerance 1e-6, plenty for a chart).
+   */
+  tolerance?: SolveTolerance;
+}
+
 export function speedAltitudeSweep(
   plan: Plan,
   legIndex: number,
   speeds_m_s: readonly number[],
   altitudes_m: readonly number[],
+  options: SweepOptions = {},
 ): SpeedAltitudeGrid {
   requireLeg(plan, legIndex, ['cruise', 'loiter']);
   speeds_m_s.forEach((v, i) => {
@@ -53,7 +62,7 @@ export function speedAltitudeSweep(
   }
   const work = clonePlan(plan);
   const leg = work.legs[legIndex] as CruiseLeg | LoiterLeg;
-  const model = buildModel(work);
+  const model = buildModel(work, options.tolerance ?? 'precise');
   const ctx = { model, index: legIndex, samples: 0 };
   const { mass_kg } = legStart.start;
   const left = model.consumable === 'fuel' ? legStart.start.fuel_kg : legStart.start.energy_J;

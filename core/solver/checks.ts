@@ -1,9 +1,10 @@
 /**
  * Feasibility checks with margins (DESIGN.md §3, common practice): take-off mass ≤ MTOW,
  * fuel volume ≤ tank, reserve kept on landing, per leg speed ≥ stallFactor × V_stall, power
- * required ≤ available, rate of climb ≥ the service-ceiling rate, altitude ≤ ceiling, and the
- * battery never below its floor. Margin: (limit − value)/limit for upper limits,
- * (value − limit)/limit for lower ones; fails below 0, tight below settings.tightMargin.
+ * required ≤ available, rate of climb ≥ the service-ceiling rate; for the plan, the highest
+ * altitude ≤ ceiling and the battery never below its floor (airfield checks: fieldChecks.ts).
+ * Margin: (limit − value)/limit for upper limits, (value − limit)/limit for lower ones;
+ * fails below 0, tight below settings.tightMargin.
  */
 import type { Plan } from '../plan/schema.ts';
 import { fuelDensity_kg_L } from '../propulsion/index.ts';
@@ -14,7 +15,7 @@ import { fmt } from './point.ts';
 import { LIMIT_TOLERANCE } from './segment.ts';
 import type { Check, CheckState } from './types.ts';
 
-interface CheckInput {
+export interface CheckInput {
   id: string;
   label: string;
   legIndex: number | null;
@@ -28,17 +29,39 @@ interface CheckInput {
   detail: string;
   /** Fails whatever the numbers say (the reserve of a mission that was not completed). */
   fails?: boolean;
+  /** Replaces the computed margin (a check whose numbers could not be worked out). */
+  margin?: number;
+  subject?: string;
+  factor?: number;
+  reason?: string;
+  incomplete?: boolean;
 }
 
-function makeCheck(c: CheckInput, tight: number): Check {
+export function makeCheck(c: CheckInput, tight: number): Check {
   // A limit at or near 0 makes a relative margin meaningless: measure against the scale.
   const scale = c.reference > 1e-9 ? c.reference : 1;
   const ref = Math.max(Math.abs(c.limit), 1e-6 * scale);
-  const margin = (c.bound === 'max' ? c.limit - c.value : c.value - c.limit) / ref;
+  const margin = c.margin ?? (c.bound === 'max' ? c.limit - c.value : c.value - c.limit) / ref;
   const state: CheckState =
     c.fails || margin < -LIMIT_TOLERANCE ? 'fails' : margin < tight ? 'tight' : 'ok';
-  const { bound: _b, reference: _r, fails: _f, ...rest } = c;
-  return { ...rest, margin, state };
+  // Built field by field: a rest-spread copy is several times slower in V8 and leaves an
+  // object shape that later walks (guard.ts) are slow on.
+  const check: Check = {
+    id: c.id,
+    label: c.label,
+    legIndex: c.legIndex,
+    value: c.value,
+    limit: c.limit,
+    quantity: c.quantity,
+    margin,
+    state,
+    detail: c.detail,
+  };
+  if (c.subject !== undefined) check.subject = c.subject;
+  if (c.factor !== undefined) check.factor = c.factor;
+  if (c.reason !== undefined) check.reason = c.reason;
+  if (c.incomplete) check.incomplete = true;
+  return check;
 }
 
 export interface MissionSummary {
@@ -52,6 +75,7 @@ export function missionChecks(
   plan: Plan,
   legs: readonly LegOutcome[],
   mission: MissionSummary,
+  extra: readonly CheckInput[] = [],
 ): Check[] {
   const tight = plan.settings.tightMargin;
   const inputs: CheckInput[] = [];
@@ -95,11 +119,13 @@ export function missionChecks(
     bound: 'min',
     reference: model.consumableStart,
     fails: !mission.completed,
+    incomplete: !mission.completed,
     detail: mission.completed
       ? `On landing ${fmt(mission.remaining)} ${unit} left against ${fmt(mission.requiredReserve)} ${unit} of reserve required.`
       : `The mission is not completed; ${fmt(mission.remaining)} ${unit} left where it stops, ${fmt(mission.requiredReserve)} ${unit} of reserve required.`,
   });
   legs.forEach((o, i) => legChecks(inputs, plan, o, i));
+  ceilingCheck(inputs, plan, legs);
   if (!fuel) {
     const soc = model.usableEnergy_J > 0 ? mission.remaining / model.usableEnergy_J : 0;
     const floor = plan.reserves.socFloor;
@@ -115,6 +141,7 @@ export function missionChecks(
       detail: `Lowest charge ${fmt(100 * soc)} % of usable energy against a floor of ${fmt(100 * floor)} %.`,
     });
   }
+  inputs.push(...extra);
   return inputs.map((c) => makeCheck(c, tight));
 }
 
@@ -134,6 +161,7 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
       quantity: 'ratio',
       bound: 'min',
       reference: 1,
+      subject: name,
       detail: `${name}: lowest airspeed ${fmt(c.minStallRatio)} × stall speed against ${sf}.`,
     });
   }
@@ -147,6 +175,7 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
       quantity: 'power',
       bound: 'max',
       reference: Math.max(Math.abs(c.power.required_W), 1),
+      subject: name,
       detail: `${name}: needs ${fmt(c.power.required_W)} W of thrust power where ${fmt(c.power.available_W)} W is available.`,
     });
   }
@@ -160,23 +189,40 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
       quantity: 'verticalSpeed',
       bound: 'min',
       reference: 1,
+      subject: name,
       detail: `${name}: least rate of climb ${fmt(c.climb.min_m_s)} m/s against ${fmt(c.climb.floor_m_s)} m/s.`,
     });
   }
-  if (c.maxAltitude_m !== null) {
-    const ceiling = plan.aircraft.ceiling_m;
-    inputs.push({
-      id: `ceiling:${i}`,
-      label: `${name}: ceiling`,
-      legIndex: i,
-      value: c.maxAltitude_m,
-      limit: ceiling,
-      quantity: 'altitude',
-      bound: 'max',
-      reference: 1000,
-      detail: `${name}: highest altitude ${fmt(c.maxAltitude_m)} m against a ceiling of ${fmt(ceiling)} m.`,
-    });
-  }
+}
+
+/** One plan-level check: the highest altitude of the mission against the aircraft's ceiling. */
+function ceilingCheck(inputs: CheckInput[], plan: Plan, legs: readonly LegOutcome[]): void {
+  let highest = -Infinity;
+  let at = -1;
+  // The first leg to reach the top names it (a level leg there ties within rounding).
+  legs.forEach((o, i) => {
+    const h = o.checks.maxAltitude_m;
+    if (h !== null && h > highest + 1e-6) {
+      highest = h;
+      at = i;
+    }
+  });
+  const leg = plan.legs[at];
+  if (leg === undefined) return;
+  const name = legName(at, leg);
+  const ceiling = plan.aircraft.ceiling_m;
+  inputs.push({
+    id: 'ceiling',
+    label: 'Ceiling',
+    legIndex: null,
+    value: highest,
+    limit: ceiling,
+    quantity: 'altitude',
+    bound: 'max',
+    reference: 1000,
+    subject: name,
+    detail: `Highest altitude ${fmt(highest)} m (${name}) against a ceiling of ${fmt(ceiling)} m.`,
+  });
 }
 
 /** Worst state among the checks; 'fails' when any leg failed. */

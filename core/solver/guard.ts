@@ -8,32 +8,54 @@ import type { PlanResult } from './types.ts';
 /** Paths of the non-finite numbers found (each replaced by 0 in place). */
 export function replaceNonFinite(value: unknown, path = ''): string[] {
   const found: string[] = [];
-  walk(value, path, found);
+  walk(value, path ? [path] : [], found);
   return found;
 }
 
-// Paths are only spelled out where something is found: results carry thousands of samples.
-function walk(value: unknown, path: string, found: string[]): void {
+/** A path from its parts: object keys joined by dots, array indices in brackets. */
+function spell(parts: readonly (string | number)[], last: string | number): string {
+  let out = '';
+  for (const p of [...parts, last]) {
+    if (typeof p === 'number') out += `[${p}]`;
+    else out += out ? `.${p}` : p;
+  }
+  return out;
+}
+
+// Results carry thousands of numbers and are walked after every solve (a Monte Carlo solves
+// thousands of plans): the path is kept as a stack of parts and spelt out only where
+// something is found.
+function walk(value: unknown, parts: (string | number)[], found: string[]): void {
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
       const v: unknown = value[i];
       if (typeof v === 'number') {
         if (!Number.isFinite(v)) {
           value[i] = 0;
-          found.push(`${path}[${i}]`);
+          found.push(spell(parts, i));
         }
-      } else if (v !== null && typeof v === 'object') walk(v, `${path}[${i}]`, found);
+      } else if (v !== null && typeof v === 'object') {
+        parts.push(i);
+        walk(v, parts, found);
+        parts.pop();
+      }
     }
   } else if (value !== null && typeof value === 'object') {
     const obj = value as Record<string, unknown>;
-    for (const key in obj) {
+    const keys = Object.keys(obj);
+    for (let k = 0; k < keys.length; k++) {
+      const key = keys[k]!;
       const v = obj[key];
       if (typeof v === 'number') {
         if (!Number.isFinite(v)) {
           obj[key] = 0;
-          found.push(path ? `${path}.${key}` : key);
+          found.push(spell(parts, key));
         }
-      } else if (v !== null && typeof v === 'object') walk(v, path ? `${path}.${key}` : key, found);
+      } else if (v !== null && typeof v === 'object') {
+        parts.push(key);
+        walk(v, parts, found);
+        parts.pop();
+      }
     }
   }
 }

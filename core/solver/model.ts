@@ -14,18 +14,40 @@ import type { FixedSpeed, Plan, Powerplant, Settings } from '../plan/schema.ts';
 import { pressureAltitudeFromPressure } from '../atmosphere.ts';
 import { consumableOf, usableEnergy_J } from '../propulsion/index.ts';
 import { G0 } from '../units.ts';
+import { optimumCL, type OptimumCL } from './optimumCL.ts';
+import { engineMaximum, powerConstants, type PowerConstants } from './power.ts';
 import type { Consumable } from './types.ts';
 
 export interface Ambient {
   h_m: number;
   pressureAltitude_m: number;
   atm: AtmosphereState;
+  /** Jet T_max (N), propeller shaft P_max (W) or electric motor shaft power (W) here. */
+  engineMax: number;
 }
+
+/**
+ * Integration accuracy: 'precise' (relative tolerance 1e-9, the default; the accuracy bar of
+ * DESIGN.md §6) or 'fast' (1e-6, for Monte Carlo samples and sweeps, where the inputs are
+ * far less certain than that).
+ */
+export type SolveTolerance = 'precise' | 'fast';
+
+export const RELATIVE_TOLERANCE: Readonly<Record<SolveTolerance, number>> = Object.freeze({
+  precise: 1e-9,
+  fast: 1e-6,
+});
 
 export interface FlightModel {
   readonly S_m2: number;
   readonly polar: PolarCoefficients;
   readonly pp: Powerplant;
+  /** The powerplant's constants, validated once (power.ts). */
+  readonly power: PowerConstants;
+  /** Lift coefficients of the still-air best-range and best-endurance speeds. */
+  readonly optimumCL: OptimumCL;
+  /** Relative tolerance of the integrator. */
+  readonly rtol: number;
   readonly consumable: Consumable;
   readonly isaOffset_K: number;
   /** Hp − h for the plan's QNH. */
@@ -40,19 +62,29 @@ export interface FlightModel {
   readonly takeoffMass_kg: number;
   /** Last ambient evaluated (legs at one altitude ask for the same air many times). */
   cache: Ambient | null;
+  /** Last answer of altitudeForDensity, the warm start of the next (cruise-climb). */
+  densityCache: { rho_kg_m3: number; Hp_m: number; slope: number } | null;
 }
 
-export function buildModel(plan: Plan): FlightModel {
+export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): FlightModel {
+  if (!Object.hasOwn(RELATIVE_TOLERANCE, tolerance)) {
+    throw new InputError('tolerance', tolerance, "'precise' or 'fast'");
+  }
   const ac = plan.aircraft;
   const pp = ac.powerplant;
   const consumable = consumableOf(pp);
+  const polar = polarCoefficients(ac.polar);
+  const power = powerConstants(pp, atmosphereAt(0));
   const usable = pp.type === 'electric' ? usableEnergy_J(pp.battery) : 0;
   const start = pp.type === 'electric' ? usable : pp.fuel.load_kg;
   const carried = pp.type === 'electric' ? pp.battery.mass_kg : pp.fuel.load_kg;
   return {
     S_m2: ac.wingArea_m2,
-    polar: polarCoefficients(ac.polar),
+    polar,
     pp,
+    power,
+    optimumCL: optimumCL(polar, power),
+    rtol: RELATIVE_TOLERANCE[tolerance],
     consumable,
     isaOffset_K: plan.environment.isaOffset_K,
     pressureAltitudeOffset_m: pressureAltitudeFromPressure(
@@ -65,6 +97,7 @@ export function buildModel(plan: Plan): FlightModel {
     usableEnergy_J: usable,
     takeoffMass_kg: ac.mass.empty_kg + ac.mass.payload_kg + carried,
     cache: null,
+    densityCache: null,
   };
 }
 
@@ -77,7 +110,7 @@ export function ambientAt(model: FlightModel, h_m: number): Ambient {
     altitude: 'pressureAltitude_m',
     isaOffset: 'environment.isaOffset_K',
   });
-  const amb = { h_m, pressureAltitude_m: Hp, atm };
+  const amb = { h_m, pressureAltitude_m: Hp, atm, engineMax: engineMaximum(model.pp, atm, Hp) };
   model.cache = amb;
   return amb;
 }
@@ -89,25 +122,55 @@ export function ambientAt(model: FlightModel, h_m: number): Ambient {
  */
 export function altitudeForDensity(model: FlightModel, rho_kg_m3: number): number {
   const off = model.pressureAltitudeOffset_m;
+  const dT = model.isaOffset_K;
+  if (dT === 0) return densityAltitude(rho_kg_m3, 'cruiseClimb.density_kg_m3') - off;
+  // Along a cruise-climb the density changes little from one call to the next: start from
+  // the last answer and reuse its slope (chord iterations, one atmosphere each).
+  const warm = warmDensityAltitude(model, rho_kg_m3);
+  if (warm !== null) return warm - off;
   let Hp = densityAltitude(rho_kg_m3, 'cruiseClimb.density_kg_m3');
-  if (model.isaOffset_K !== 0) {
-    for (let it = 0; it < 30; it++) {
-      const d = 0.5;
-      const r0 = atmosphereAt(Hp, model.isaOffset_K).rho_kg_m3;
-      const r1 = atmosphereAt(Hp + d, model.isaOffset_K).rho_kg_m3;
-      const step = ((rho_kg_m3 - r0) * d) / (r1 - r0);
-      if (!Number.isFinite(step)) {
-        throw new InputError(
-          'cruiseClimb.density_kg_m3',
-          rho_kg_m3,
-          'a density found in the atmosphere',
-        );
-      }
-      Hp += step;
-      if (Math.abs(step) < 1e-9) break;
+  let slope = NaN;
+  for (let it = 0; it < 30; it++) {
+    const d = 0.5;
+    const r0 = densityAt(Hp, dT);
+    slope = (densityAt(Hp + d, dT) - r0) / d;
+    const step = (rho_kg_m3 - r0) / slope;
+    if (!Number.isFinite(step)) {
+      throw new InputError(
+        'cruiseClimb.density_kg_m3',
+        rho_kg_m3,
+        'a density found in the atmosphere',
+      );
     }
+    Hp += step;
+    if (Math.abs(step) < 1e-9) break;
   }
+  model.densityCache = { rho_kg_m3, Hp_m: Hp, slope };
   return Hp - off;
+}
+
+/** Chord iterations from the last answer; null when they do not settle (then start afresh). */
+function warmDensityAltitude(model: FlightModel, rho_kg_m3: number): number | null {
+  const c = model.densityCache;
+  if (c === null) return null;
+  let Hp = c.Hp_m + (rho_kg_m3 - c.rho_kg_m3) / c.slope;
+  try {
+    for (let it = 0; it < 8 && Number.isFinite(Hp); it++) {
+      const step = (rho_kg_m3 - densityAt(Hp, model.isaOffset_K)) / c.slope;
+      Hp += step;
+      if (Math.abs(step) < 1e-9) {
+        model.densityCache = { rho_kg_m3, Hp_m: Hp, slope: c.slope };
+        return Hp;
+      }
+    }
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+  }
+  return null;
+}
+
+function densityAt(Hp: number, isaOffset_K: number): number {
+  return atmosphereAt(Hp, isaOffset_K).rho_kg_m3;
 }
 
 /** TAS of a fixed airspeed (TAS, EAS, CAS or Mach) in this air. */

@@ -10,7 +10,14 @@
  * allocates only its work arrays once per call. The independent variable may decrease.
  */
 
-import { initialStep, locateEvent } from './odeSupport.ts';
+import { dopriStages, settleOnEvent } from './odeStages.ts';
+import {
+  acquireWorkspace,
+  initialStep,
+  locateEvent,
+  releaseWorkspace,
+  type OdeWorkspace,
+} from './odeSupport.ts';
 
 export type OdeRhs = (x: number, y: Float64Array, dydx: Float64Array) => void;
 
@@ -58,31 +65,7 @@ export class OdeError extends Error {
   override readonly name = 'OdeError';
 }
 
-// Dormand–Prince 5(4) tableau (Hairer, Nørsett & Wanner, Table II.5.2).
-const C2 = 1 / 5;
-const C3 = 3 / 10;
-const C4 = 4 / 5;
-const C5 = 8 / 9;
-const A21 = 1 / 5;
-const A31 = 3 / 40;
-const A32 = 9 / 40;
-const A41 = 44 / 45;
-const A42 = -56 / 15;
-const A43 = 32 / 9;
-const A51 = 19372 / 6561;
-const A52 = -25360 / 2187;
-const A53 = 64448 / 6561;
-const A54 = -212 / 729;
-const A61 = 9017 / 3168;
-const A62 = -355 / 33;
-const A63 = 46732 / 5247;
-const A64 = 49 / 176;
-const A65 = -5103 / 18656;
-const A71 = 35 / 384;
-const A73 = 500 / 1113;
-const A74 = 125 / 192;
-const A75 = -2187 / 6784;
-const A76 = 11 / 84;
+// Dormand–Prince 5(4) tableau: stages and weights in odeStages.ts.
 // Error coefficients: 5th-order weights minus 4th-order weights.
 const E1 = 71 / 57600;
 const E3 = -71 / 16695;
@@ -140,26 +123,35 @@ export function integrate(
   const dir = x1 > x0 ? 1 : -1;
   const span = Math.abs(x1 - x0);
   const hMax = Math.min(options.maxStep ?? span, span);
-  const k1 = new Float64Array(n);
-  const k2 = new Float64Array(n);
-  const k3 = new Float64Array(n);
-  const k4 = new Float64Array(n);
-  const k5 = new Float64Array(n);
-  const k6 = new Float64Array(n);
-  let k7 = new Float64Array(n);
-  let kFirst = k1;
-  const yt = new Float64Array(n);
-  let yNew = new Float64Array(n);
+  const ws = acquireWorkspace(n);
+  try {
+    return steps(f, x0, x1, options, result, ws, dir, hMax, rtol, atol, maxSteps);
+  } finally {
+    releaseWorkspace(ws);
+  }
+}
+
+/** The step loop of `integrate`, on pooled work arrays. */
+function steps(
+  f: OdeRhs,
+  x0: number,
+  x1: number,
+  options: OdeOptions,
+  result: OdeResult,
+  ws: OdeWorkspace,
+  dir: number,
+  hMax: number,
+  rtol: number,
+  atol: number,
+  maxSteps: number,
+): OdeResult {
+  const { n, k2, k3, k4, k5, k6, yt, r, yOld } = ws;
+  const event = options.event;
+  const y = result.y;
+  let k7 = ws.k7;
+  let kFirst = ws.k1;
+  let yNew = ws.yNew;
   let yCur = y;
-  // Dense-output coefficients of the last accepted step.
-  const r: readonly [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array] = [
-    new Float64Array(n),
-    new Float64Array(n),
-    new Float64Array(n),
-    new Float64Array(n),
-    new Float64Array(n),
-  ];
-  const yOld = new Float64Array(n);
   let stepH = 0;
   let stepX0 = x0;
   const wantDense = options.onStep !== undefined || event !== undefined;
@@ -200,29 +192,8 @@ export function integrate(
       throw new OdeError(`step size became too small at ${x} (from ${x0} to ${x1})`);
     }
     const ka = kFirst;
-    for (let i = 0; i < n; i++) yt[i] = yCur[i]! + h * A21 * ka[i]!;
-    f(x + C2 * h, yt, k2);
-    for (let i = 0; i < n; i++) yt[i] = yCur[i]! + h * (A31 * ka[i]! + A32 * k2[i]!);
-    f(x + C3 * h, yt, k3);
-    for (let i = 0; i < n; i++) {
-      yt[i] = yCur[i]! + h * (A41 * ka[i]! + A42 * k2[i]! + A43 * k3[i]!);
-    }
-    f(x + C4 * h, yt, k4);
-    for (let i = 0; i < n; i++) {
-      yt[i] = yCur[i]! + h * (A51 * ka[i]! + A52 * k2[i]! + A53 * k3[i]! + A54 * k4[i]!);
-    }
-    f(x + C5 * h, yt, k5);
-    for (let i = 0; i < n; i++) {
-      yt[i] =
-        yCur[i]! + h * (A61 * ka[i]! + A62 * k2[i]! + A63 * k3[i]! + A64 * k4[i]! + A65 * k5[i]!);
-    }
     const xNew = last ? x1 : x + h;
-    f(xNew, yt, k6);
-    for (let i = 0; i < n; i++) {
-      yNew[i] =
-        yCur[i]! + h * (A71 * ka[i]! + A73 * k3[i]! + A74 * k4[i]! + A75 * k5[i]! + A76 * k6[i]!);
-    }
-    f(xNew, yNew, k7);
+    dopriStages(f, x, h, xNew, yCur, ka, ws, yNew, k7);
     result.evaluations += 6;
 
     let sum = 0;
@@ -263,7 +234,14 @@ export function integrate(
     let stopAt = xNew;
     if (event && event(xNew, yNew) < 0) {
       stopAt = locateEvent(event, x, xNew, stepView, yt);
-      stepView.interpolate(stopAt, yNew);
+      // The state there from a Runge–Kutta step of its own rather than the interpolant, which
+      // is less accurate, and much less where the crossing is a kink in f.
+      const settled = settleOnEvent(f, event, x, stopAt, yCur, ka, ws);
+      result.evaluations += settled.evaluations;
+      if (settled.x !== null) {
+        stopAt = settled.x;
+        yNew.set(ws.ye);
+      } else stepView.interpolate(stopAt, yNew);
       result.stoppedByEvent = true;
     }
     if (options.onStep) {

@@ -2,7 +2,7 @@
  * Parts of the Dormand–Prince integrator (ode.ts) kept apart for size: the starting step
  * size (Hairer, Nørsett & Wanner, Solving Ordinary Differential Equations I, §II.4) and the
  * location of an event on a step's dense output (Illinois regula falsi; Dowell & Jarratt,
- * BIT 11, 1971, from memory).
+ * BIT 11, 1971, from memory), and the pool of work arrays.
  */
 import type { OdeRhs, OdeStep } from './ode.ts';
 
@@ -85,4 +85,61 @@ export function initialStep(
   const h1 = dm <= 1e-15 ? Math.max(1e-6, h0 * 1e-3) : Math.pow(0.01 / dm, 0.2);
   const h = Math.min(100 * h0, h1, hMax);
   return Number.isFinite(h) && h > 0 ? h : hMax;
+}
+
+/** The work arrays of one integration: stages, trial state, dense-output coefficients. */
+export interface OdeWorkspace {
+  n: number;
+  k1: Float64Array;
+  k2: Float64Array;
+  k3: Float64Array;
+  k4: Float64Array;
+  k5: Float64Array;
+  k6: Float64Array;
+  k7: Float64Array;
+  yt: Float64Array;
+  yNew: Float64Array;
+  yOld: Float64Array;
+  /** The state at an event and f there. */
+  ye: Float64Array;
+  ke: Float64Array;
+  r: readonly [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
+}
+
+// Sweeps and Monte Carlo runs integrate tens of thousands of short legs; reusing the work
+// arrays spares the garbage collector. Each running integration holds its own workspace, so
+// an integration started from inside another (a right-hand side that integrates) is safe.
+const pool: OdeWorkspace[] = [];
+const POOL_SIZE = 8;
+
+export function acquireWorkspace(n: number): OdeWorkspace {
+  for (let i = pool.length - 1; i >= 0; i--) {
+    const ws = pool[i]!;
+    if (ws.n === n) {
+      pool[i] = pool[pool.length - 1]!;
+      pool.pop();
+      return ws;
+    }
+  }
+  const a = () => new Float64Array(n);
+  return {
+    n,
+    k1: a(),
+    k2: a(),
+    k3: a(),
+    k4: a(),
+    k5: a(),
+    k6: a(),
+    k7: a(),
+    yt: a(),
+    yNew: a(),
+    yOld: a(),
+    ye: a(),
+    ke: a(),
+    r: [a(), a(), a(), a(), a()],
+  };
+}
+
+export function releaseWorkspace(ws: OdeWorkspace): void {
+  if (pool.length < POOL_SIZE) pool.push(ws);
 }

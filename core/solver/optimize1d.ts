@@ -24,15 +24,26 @@ export interface BoundedMaximum {
 
 /**
  * The maximum of a unimodal f on [lo, hi] (0 < lo). `guess` (for instance the answer at a
- * neighbouring state) lets the search start with Newton directly.
+ * neighbouring state) lets the search start with Newton directly; `boundHint` (the answer at
+ * a neighbouring state lay at that end) lets it confirm that end with two evaluations: for a
+ * unimodal f, f(lo) ≥ f(lo + δ) puts the maximum within δ of lo, where the full search
+ * would also snap to lo (boundOrInterior).
  */
 export function maximizeBounded(
   f: (x: number) => number,
   lo: number,
   hi: number,
   guess?: number,
+  boundHint?: 'lo' | 'hi',
 ): BoundedMaximum {
   if (!(hi > lo)) return { x: lo, atBound: 'lo' };
+  if (boundHint === 'lo') {
+    const d = Math.min(REL_STEP * lo, 0.5 * (hi - lo));
+    if (f(lo) >= f(lo + d)) return { x: lo, atBound: 'lo' };
+  } else if (boundHint === 'hi') {
+    const d = Math.min(REL_STEP * hi, 0.5 * (hi - lo));
+    if (f(hi) >= f(hi - d)) return { x: hi, atBound: 'hi' };
+  }
   if (guess !== undefined && guess > lo && guess < hi) {
     const polished = newtonPolish(f, guess, lo, hi);
     if (polished) return polished;

@@ -11,8 +11,6 @@
  * Horizontal airspeed √(V² − ḣ²) enters the wind triangle.
  */
 import type { FixedSpeed } from '../plan/schema.ts';
-import { dragCoefficient } from '../polar.ts';
-import { availableThrustPower_W, consumptionRate } from '../propulsion/index.ts';
 import { G0 } from '../units.ts';
 import {
   altitudeForDensity,
@@ -21,11 +19,13 @@ import {
   type Ambient,
   type FlightModel,
 } from './model.ts';
+import { availablePower_W, consumption, idleExcess } from './power.ts';
 import {
   bestClimbTas,
   bestEnduranceTas,
   bestGlideTas,
   bestRangeTas,
+  dragCoefficientOf,
   type SpeedChoice,
   type SpeedContext,
 } from './speeds.ts';
@@ -83,6 +83,8 @@ export interface Point {
   powerAvailable_W: number;
   /** Fuel kg/s (fuel burners) or battery drain W (electric). */
   rate: number;
+  /** Demand above the idle floor as a fraction of the maximum (power.ts idleExcess). */
+  idleExcess: number;
   /** Vertical speed ḣ, + up. */
   climb_m_s: number;
   /** V/V_stall = √(CLmax/CL). */
@@ -106,6 +108,7 @@ export function newPoint(model: FlightModel, h_m: number): Point {
     powerRequired_W: 0,
     powerAvailable_W: 0,
     rate: 0,
+    idleExcess: 0,
     climb_m_s: 0,
     stallRatio: 0,
     speedLimitedBy: null,
@@ -113,9 +116,18 @@ export function newPoint(model: FlightModel, h_m: number): Point {
   };
 }
 
-/** Warm start of the speed searches along one leg. */
+/**
+ * What a segment remembers between evaluations of its speed schedule: the last answer and
+ * the state it was for (an electric aircraft at one altitude keeps its mass, so its best
+ * speed is one number for the whole leg), and the warm start of the next search.
+ */
 export interface ScheduleMemo {
   guess_m_s?: number;
+  boundHint?: 'lo' | 'hi';
+  amb?: Ambient;
+  mass_kg?: number;
+  tas_m_s?: number;
+  limitedBy?: SpeedChoice['limitedBy'];
 }
 
 function scheduleTas(
@@ -130,11 +142,20 @@ function scheduleTas(
   out.speedLimitedBy = null;
   switch (s.kind) {
     case 'fixed':
-      return fixedSpeedTas(s.speed, amb.atm, path.field);
+      // Depends on the air only.
+      if (memo.amb !== amb || memo.tas_m_s === undefined) {
+        memo.tas_m_s = fixedSpeedTas(s.speed, amb.atm, path.field);
+        memo.amb = amb;
+      }
+      return memo.tas_m_s;
     case 'constantTas':
       return s.tas_m_s;
     case 'constantCL':
       return Math.sqrt((2 * mass_kg * G0) / (amb.atm.rho_kg_m3 * model.S_m2 * s.CL));
+  }
+  if (memo.amb === amb && memo.mass_kg === mass_kg && memo.tas_m_s !== undefined) {
+    out.speedLimitedBy = memo.limitedBy ?? null;
+    return memo.tas_m_s;
   }
   const ctx: SpeedContext = {
     model,
@@ -143,13 +164,22 @@ function scheduleTas(
     headwind_m_s: path.headwind_m_s,
     crosswind_m_s: path.crosswind_m_s,
     guess_m_s: memo.guess_m_s,
+    boundHint: memo.boundHint,
   };
   let choice: SpeedChoice;
   if (s.kind === 'bestRange') choice = bestRangeTas(ctx);
   else if (s.kind === 'bestEndurance') choice = bestEnduranceTas(ctx);
   else if (s.kind === 'bestGlide') choice = bestGlideTas(ctx);
   else choice = bestClimbTas(ctx, path.vertical.kind === 'climb' ? path.vertical.throttle : 1);
-  if (choice.limitedBy === null) memo.guess_m_s = choice.optimum_m_s;
+  const at = choice.optimumAt ?? null;
+  if (at === null) {
+    memo.guess_m_s = choice.optimum_m_s;
+    memo.boundHint = undefined;
+  } else memo.boundHint = at;
+  memo.amb = amb;
+  memo.mass_kg = mass_kg;
+  memo.tas_m_s = choice.tas_m_s;
+  memo.limitedBy = choice.limitedBy;
   out.speedLimitedBy = choice.limitedBy;
   return choice.tas_m_s;
 }
@@ -181,10 +211,9 @@ export function evaluatePoint(
   }
   const q = 0.5 * amb.atm.rho_kg_m3 * V * V;
   const CL = W / (q * S);
-  const CD = dragCoefficient(model.polar, CL);
+  const CD = dragCoefficientOf(model.polar, CL);
   const D = q * S * CD;
-  const pp = model.pp;
-  const avail = availableThrustPower_W(pp, amb.atm, amb.pressureAltitude_m, V);
+  const avail = availablePower_W(model.power, amb.engineMax, V);
   let climb = 0;
   let thrust = D * V;
   let required = D * V;
@@ -224,7 +253,8 @@ export function evaluatePoint(
   out.thrustPower_W = thrust;
   out.powerRequired_W = required;
   out.powerAvailable_W = avail;
-  out.rate = consumptionRate(pp, thrust, V, amb.atm, amb.pressureAltitude_m);
+  out.rate = consumption(model.power, amb.engineMax, thrust, V);
+  out.idleExcess = idleExcess(model.power, amb.engineMax, thrust, V);
   out.climb_m_s = climb;
   out.stallRatio = Math.sqrt(model.polar.CLmax / CL);
   return out;

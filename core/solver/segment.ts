@@ -10,126 +10,46 @@
  * stops where the first one is broken, located on the dense output.
  */
 import { InputError } from '../errors.ts';
-import type { LegSeries } from './types.ts';
 import type { FlightModel } from './model.ts';
-import { integrate, OdeError } from './ode.ts';
+import { integrate, OdeError, type OdeStep } from './ode.ts';
+import { evaluatePoint, FlightLimit, newPoint, type Point, type ScheduleMemo } from './point.ts';
 import {
-  evaluatePoint,
-  FlightLimit,
-  newPoint,
-  type FlightPath,
-  type Point,
-  type ScheduleMemo,
-} from './point.ts';
-import { emptyStats, powerMargin, record, type SegmentStats } from './segmentStats.ts';
+  A,
+  climbFloor,
+  emptySeries,
+  fromVector,
+  H,
+  indepIndex,
+  limitMargin,
+  M,
+  pushSample,
+  Q,
+  T,
+  toVector,
+  X,
+  type LimitKind,
+  type MissionState,
+  type SegmentOutcome,
+  type SegmentSpec,
+} from './segmentParts.ts';
+import { emptyStats, record } from './segmentStats.ts';
 
 export type { SegmentStats } from './segmentStats.ts';
-export type Independent = 't' | 'x' | 'h' | 'q';
-export type LimitKind = 'stall' | 'power' | 'climb' | 'consumable' | 'wind';
+export {
+  climbFloor,
+  limitMargin,
+  LIMIT_TOLERANCE,
+  type Independent,
+  type LimitKind,
+  type MissionState,
+  type SegmentOutcome,
+  type SegmentSpec,
+} from './segmentParts.ts';
 
-/** Mission state carried from leg to leg. */
-export interface MissionState {
-  t_s: number;
-  x_m: number;
-  air_m: number;
-  h_m: number;
-  mass_kg: number;
-  /** Fuel kg or usable battery energy J left. */
-  left: number;
-}
-
-export interface SegmentSpec {
-  path: FlightPath;
-  indep: Independent;
-  /** Value of the independent variable where the segment ends. */
-  to: number;
-  limits: readonly LimitKind[];
-  /** Climb-rate floor (m/s) for the `climb` limit. */
-  minClimbRate_m_s?: number;
-  /** Chart samples (0: none). */
-  samples: number;
-}
-
-export interface SegmentOutcome {
-  end: MissionState;
-  /** Which limit or error stopped the segment early (null: reached `to`). */
-  stoppedBy: LimitKind | 'error' | null;
-  /** Why it stopped, for `stoppedBy` = 'error'. */
-  message: string;
-  /** Flight condition at the end (or at the stop). */
-  endPoint: Point;
-  steps: number;
-  stats: SegmentStats;
-  series: LegSeries;
-}
-
-const T = 0;
-const X = 1;
-const A = 2;
-const H = 3;
-const M = 4;
-const Q = 5;
-/** A limit counts as broken only beyond this relative margin (rounding at a limited speed). */
-export const LIMIT_TOLERANCE = 1e-9;
-
-function toVector(s: MissionState): Float64Array {
-  return Float64Array.of(s.t_s, s.x_m, s.air_m, s.h_m, s.mass_kg, s.left);
-}
-
-function indepIndex(i: Independent): number {
-  return i === 't' ? T : i === 'x' ? X : i === 'h' ? H : Q;
-}
-
-/**
- * Relative margin of each limit at a point (negative: broken). Flight limits get
- * LIMIT_TOLERANCE of slack (a speed held exactly at a limit must not trip it by rounding);
- * the consumable gets none, so a stop for it never leaves a negative amount.
- */
-export function limitMargin(
-  kind: LimitKind,
-  p: Point,
-  left: number,
-  model: FlightModel,
-  spec: SegmentSpec,
-): number {
-  switch (kind) {
-    case 'stall':
-      return p.stallRatio / model.settings.stallFactor - 1 + LIMIT_TOLERANCE;
-    case 'power':
-      return powerMargin(p) + LIMIT_TOLERANCE;
-    case 'climb': {
-      const floor = climbFloor(spec);
-      return (p.climb_m_s - floor) / floor + LIMIT_TOLERANCE;
-    }
-    case 'consumable':
-      return left / (model.consumableStart > 1e-9 ? model.consumableStart : 1);
-    case 'wind': {
-      const cross = Math.abs(spec.path.crosswind_m_s);
-      return Math.min(p.groundSpeed_m_s, p.horizontal_m_s - cross) / p.tas_m_s + LIMIT_TOLERANCE;
-    }
-  }
-}
-
-/** A zero rate of climb is reached only after infinite time; 0.01 m/s stands in for it. */
-export function climbFloor(spec: SegmentSpec): number {
-  return Math.max(spec.minClimbRate_m_s ?? 0, 0.01);
-}
-
-function pushSample(
-  series: LegSeries,
-  fuel: boolean,
-  y: Float64Array,
-  h_m: number,
-  tas_m_s: number,
-): void {
-  series.t_s.push(y[T]!);
-  series.x_m.push(y[X]!);
-  series.h_m.push(h_m);
-  series.mass_kg.push(y[M]!);
-  series.fuel_kg.push(fuel ? y[Q]! : 0);
-  series.energy_J.push(fuel ? 0 : y[Q]!);
-  series.tas_m_s.push(tas_m_s);
-}
+/** Hysteresis of the idle-kink watch (fraction of the maximum), so a restart does not re-fire. */
+const KINK_SLACK = 1e-9;
+/** Restarts at idle kinks per segment; beyond, the rest is integrated across them. */
+const MAX_KINK_RESTARTS = 16;
 
 /** Flies one segment from `start`; never throws for a failure of the flight itself. */
 export function flySegment(
@@ -137,65 +57,190 @@ export function flySegment(
   spec: SegmentSpec,
   start: MissionState,
 ): SegmentOutcome {
-  const memo: ScheduleMemo = {};
-  // Over the consumable itself the end is exact: its own limit would only see rounding.
-  const limits = spec.indep === 'q' ? spec.limits.filter((k) => k !== 'consumable') : spec.limits;
-  const fuel = model.consumable === 'fuel';
-  const ix = indepIndex(spec.indep);
-  const y0 = toVector(start);
-  const s0 = y0[ix]!;
-  const stats = emptyStats();
-  const series: LegSeries = {
-    t_s: [],
-    x_m: [],
-    h_m: [],
-    mass_kg: [],
-    fuel_kg: [],
-    energy_J: [],
-    tas_m_s: [],
-  };
-  // One point, remembered by the state it was evaluated at: the integrator's last stage of
-  // a step is at the step's end, so the event and the statistics there cost nothing.
-  const obsPoint = newPoint(model, start.h_m);
-  const seenAt = new Float64Array(6).fill(NaN);
-  const floorHalf = 0.5 * climbFloor(spec);
-  const last = new Float64Array(y0);
-  let steps = 0;
-  const outcome = (
+  return new SegmentFlight(model, spec, start).fly();
+}
+
+/**
+ * One segment's integration. A class rather than a nest of closures: a segment is flown
+ * thousands of times in a sweep or a Monte Carlo, and its callbacks are bound once here.
+ */
+class SegmentFlight {
+  private readonly memo: ScheduleMemo = {};
+  /** Limits watched; over the consumable itself the end is exact, so not that one. */
+  private readonly limits: readonly LimitKind[];
+  private readonly fuel: boolean;
+  private readonly ix: number;
+  private readonly y0: Float64Array;
+  private readonly s0: number;
+  private readonly stats = emptyStats();
+  private readonly series = emptySeries();
+  /**
+   * One point, remembered by the state it was evaluated at: the integrator's last stage of a
+   * step is at the step's end, so the event and the statistics there cost nothing.
+   */
+  private readonly point: Point;
+  private readonly seenAt = new Float64Array(6).fill(NaN);
+  private readonly floorHalf: number;
+  /** The end of the last accepted step. */
+  private readonly last: Float64Array;
+  private readonly scratch = new Float64Array(6);
+  private steps = 0;
+  /** Chart samples: how many, and the next one due. */
+  private readonly n: number;
+  private nextSample = 1;
+  /** ±1: the side of the idle kink being flown (power.ts idleExcess); 0: not watched. */
+  private kinkSign = 1;
+  /** Why a trial stage could not be evaluated (reported if no step at all can be taken). */
+  private outside: Error | null = null;
+  private worstKind: LimitKind | null = null;
+  private readonly rhs: (s: number, y: Float64Array, dy: Float64Array) => void;
+  private readonly event: (s: number, y: Float64Array) => number;
+  private readonly onStep: (step: OdeStep) => void;
+
+  constructor(
+    private readonly model: FlightModel,
+    private readonly spec: SegmentSpec,
+    start: MissionState,
+  ) {
+    this.limits = spec.indep === 'q' ? spec.limits.filter((k) => k !== 'consumable') : spec.limits;
+    this.fuel = model.consumable === 'fuel';
+    this.ix = indepIndex(spec.indep);
+    this.y0 = toVector(start);
+    this.s0 = this.y0[this.ix]!;
+    this.point = newPoint(model, start.h_m);
+    this.floorHalf = 0.5 * climbFloor(spec);
+    this.last = new Float64Array(this.y0);
+    this.n = Math.max(spec.samples, 2);
+    this.rhs = this.safeDerivatives.bind(this);
+    this.event = this.eventValue.bind(this);
+    this.onStep = this.accepted.bind(this);
+  }
+
+  fly(): SegmentOutcome {
+    const { spec, y0 } = this;
+    try {
+      const p0 = this.observe(y0);
+      record(this.stats, p0);
+      this.stats.startTas_m_s = p0.tas_m_s;
+      this.sample(y0, p0);
+      if (this.worstMargin(y0, p0) < 0) return this.outcome(this.worstKind, '', y0, p0.h_m);
+      // Watch the idle kink of the consumption: stop where it is crossed and start afresh, so
+      // that no step straddles a jump in the derivative.
+      this.kinkSign = p0.idleExcess >= 0 ? 1 : -1;
+      let x = this.s0;
+      let y = y0;
+      for (let restarts = 0; ; restarts++) {
+        const res = integrate(this.rhs, x, y, spec.to, {
+          rtol: this.model.rtol,
+          atol: 1e-12,
+          // The legs are smooth and nearly linear in their independent variable: the first
+          // trial step is the whole rest of the leg; the error control shrinks it as needed.
+          initialStep: Math.abs(spec.to - x),
+          maxSteps: 20_000,
+          event: this.event,
+          onStep: this.onStep,
+        });
+        // The independent variable is exactly where the integrator stopped (its own column
+        // only carries rounding).
+        res.y[this.ix] = res.x;
+        const p1 = this.observe(res.y);
+        if (!res.stoppedByEvent) return this.finish(null, res.y, p1);
+        const margin = this.worstMargin(res.y, p1);
+        if (this.kinkSign !== 0 && this.kinkMargin(p1) < margin) {
+          // Crossed the kink: watch for the way back, unless this went nowhere.
+          this.kinkSign = res.x !== x && restarts < MAX_KINK_RESTARTS ? -this.kinkSign : 0;
+          x = res.x;
+          y = res.y;
+          continue;
+        }
+        return this.finish(this.worstKind, res.y, p1);
+      }
+    } catch (e) {
+      if (e instanceof FlightLimit || e instanceof InputError || e instanceof OdeError) {
+        return this.failed(e instanceof OdeError && this.outside !== null ? this.outside : e);
+      }
+      throw e;
+    }
+  }
+
+  private failed(why: Error): SegmentOutcome {
+    const { last, series } = this;
+    let p: Point | null;
+    try {
+      p = this.observe(last);
+    } catch {
+      p = null;
+    }
+    const h = p ? p.h_m : last[H]!;
+    if (series.t_s[series.t_s.length - 1] !== last[T] || series.t_s.length < 2) {
+      pushSample(series, this.fuel, last, h, p ? p.tas_m_s : 0);
+    }
+    return this.outcome('error', why.message, last, h);
+  }
+
+  private outcome(
     stoppedBy: SegmentOutcome['stoppedBy'],
     message: string,
     y: Float64Array,
     h_m: number,
-  ): SegmentOutcome => {
-    const end = fromVector(y, h_m);
-    return { end, stoppedBy, message, endPoint: obsPoint, steps, stats, series };
-  };
-  const sample = (y: Float64Array, p: Point) => pushSample(series, fuel, y, p.h_m, p.tas_m_s);
+  ): SegmentOutcome {
+    const { point, steps, stats, series } = this;
+    return { end: fromVector(y, h_m), stoppedBy, message, endPoint: point, steps, stats, series };
+  }
 
-  const observe = (y: Float64Array): Point => {
+  private sample(y: Float64Array, p: Point): void {
+    pushSample(this.series, this.fuel, y, p.h_m, p.tas_m_s);
+  }
+
+  private finish(stoppedBy: LimitKind | null, y: Float64Array, p: Point): SegmentOutcome {
+    const t = this.series.t_s;
+    if (t.length === 1 || t[t.length - 1] !== y[T]) this.sample(y, p);
+    return this.outcome(stoppedBy, '', y, p.h_m);
+  }
+
+  private observe(y: Float64Array): Point {
+    const seen = this.seenAt;
     if (
-      y[M] === seenAt[M] &&
-      y[H] === seenAt[H] &&
-      y[T] === seenAt[T] &&
-      y[X] === seenAt[X] &&
-      y[A] === seenAt[A] &&
-      y[Q] === seenAt[Q]
+      y[M] === seen[M] &&
+      y[H] === seen[H] &&
+      y[T] === seen[T] &&
+      y[X] === seen[X] &&
+      y[A] === seen[A] &&
+      y[Q] === seen[Q]
     ) {
-      return obsPoint;
+      return this.point;
     }
-    seenAt.fill(NaN);
-    evaluatePoint(model, spec.path, y[M]!, y[H]!, memo, obsPoint);
-    seenAt.set(y);
-    return obsPoint;
-  };
-  const rhs = (_s: number, y: Float64Array, dy: Float64Array): void => {
-    const p = observe(y);
+    seen.fill(NaN);
+    evaluatePoint(this.model, this.spec.path, y[M]!, y[H]!, this.memo, this.point);
+    seen.set(y);
+    return this.point;
+  }
+
+  /**
+   * A trial stage outside the flyable region (the mass or the air run out beyond the end of
+   * the leg, no ground speed) makes the step non-finite, so the integrator rejects it and
+   * shrinks; only when no step at all can be taken does the segment stop, with this reason.
+   */
+  private safeDerivatives(s: number, y: Float64Array, dy: Float64Array): void {
+    try {
+      this.derivatives(s, y, dy);
+    } catch (e) {
+      if (!(e instanceof FlightLimit || e instanceof InputError)) throw e;
+      this.outside = e;
+      dy.fill(NaN);
+    }
+  }
+
+  private derivatives(_s: number, y: Float64Array, dy: Float64Array): void {
+    const { spec, fuel } = this;
+    const p = this.observe(y);
     let per = 1;
     if (spec.indep === 'x') {
       if (!(p.groundSpeed_m_s > 0)) throw new FlightLimit('no ground speed along the course');
       per = p.groundSpeed_m_s;
     } else if (spec.indep === 'h') {
-      per = spec.path.vertical.kind === 'climb' ? Math.max(p.climb_m_s, floorHalf) : p.climb_m_s;
+      per =
+        spec.path.vertical.kind === 'climb' ? Math.max(p.climb_m_s, this.floorHalf) : p.climb_m_s;
       if (per === 0) throw new FlightLimit('no vertical speed');
     } else if (spec.indep === 'q') {
       if (!(p.rate > 0)) throw new FlightLimit('nothing is consumed');
@@ -207,77 +252,52 @@ export function flySegment(
     dy[H] = spec.path.vertical.kind === 'cruiseClimb' ? 0 : p.climb_m_s / per;
     dy[M] = fuel ? -p.rate / per : 0;
     dy[Q] = -p.rate / per;
-  };
-  const worstMargin = (y: Float64Array, p: Point): { kind: LimitKind | null; margin: number } => {
+  }
+
+  /** The least limit margin at y (Infinity with no limits); its kind in `worstKind`. */
+  private worstMargin(y: Float64Array, p: Point): number {
     let kind: LimitKind | null = null;
     let margin = Infinity;
-    for (const k of limits) {
-      const m = limitMargin(k, p, y[Q]!, model, spec);
+    for (const k of this.limits) {
+      const m = limitMargin(k, p, y[Q]!, this.model, this.spec);
       if (m < margin) {
         margin = m;
         kind = k;
       }
     }
-    return { kind, margin };
-  };
+    this.worstKind = kind;
+    return margin;
+  }
 
-  try {
-    const p0 = observe(y0);
-    record(stats, p0);
-    stats.startTas_m_s = p0.tas_m_s;
-    sample(y0, p0);
-    const w0 = worstMargin(y0, p0);
-    if (w0.margin < 0) return outcome(w0.kind, '', y0, p0.h_m);
-    const n = Math.max(spec.samples, 2);
-    let nextSample = 1;
-    const sampleAt = (i: number) => (i === n - 1 ? spec.to : s0 + ((spec.to - s0) * i) / (n - 1));
-    const scratch = new Float64Array(6);
-    const dir = spec.to >= s0 ? 1 : -1;
-    const res = integrate(rhs, s0, y0, spec.to, {
-      rtol: 1e-9,
-      atol: 1e-12,
-      maxSteps: 20_000,
-      event: limits.length ? (_s, y) => worstMargin(y, observe(y)).margin : undefined,
-      onStep: (step) => {
-        steps++;
-        while (spec.samples > 0 && nextSample < n && dir * (sampleAt(nextSample) - step.x1) < 0) {
-          step.interpolate(sampleAt(nextSample), scratch);
-          sample(scratch, observe(scratch));
-          record(stats, obsPoint);
-          nextSample++;
-        }
-        last.set(step.y1);
-        record(stats, observe(step.y1));
-      },
-    });
-    // The independent variable ends exactly where asked (its own column only carries rounding).
-    res.y[ix] = res.x;
-    const p1 = observe(res.y);
-    if (series.t_s.length === 1 || series.t_s[series.t_s.length - 1] !== res.y[T])
-      sample(res.y, p1);
-    if (res.stoppedByEvent) return outcome(worstMargin(res.y, p1).kind, '', res.y, p1.h_m);
-    return outcome(null, '', res.y, p1.h_m);
-  } catch (e) {
-    if (e instanceof FlightLimit || e instanceof InputError || e instanceof OdeError) {
-      const p = safeObserve(observe, last);
-      const h = p ? p.h_m : last[H]!;
-      if (series.t_s[series.t_s.length - 1] !== last[T] || series.t_s.length < 2) {
-        pushSample(series, fuel, last, h, p ? p.tas_m_s : 0);
-      }
-      return outcome('error', e.message, last, h);
+  private kinkMargin(p: Point): number {
+    return this.kinkSign * p.idleExcess + KINK_SLACK;
+  }
+
+  private eventValue(_s: number, y: Float64Array): number {
+    const p = this.observe(y);
+    const g = this.worstMargin(y, p);
+    return this.kinkSign !== 0 ? Math.min(g, this.kinkMargin(p)) : g;
+  }
+
+  private sampleAt(i: number): number {
+    const { spec, s0, n } = this;
+    return i === n - 1 ? spec.to : s0 + ((spec.to - s0) * i) / (n - 1);
+  }
+
+  private accepted(step: OdeStep): void {
+    this.steps++;
+    const dir = this.spec.to >= this.s0 ? 1 : -1;
+    while (
+      this.spec.samples > 0 &&
+      this.nextSample < this.n &&
+      dir * (this.sampleAt(this.nextSample) - step.x1) < 0
+    ) {
+      step.interpolate(this.sampleAt(this.nextSample), this.scratch);
+      this.sample(this.scratch, this.observe(this.scratch));
+      record(this.stats, this.point);
+      this.nextSample++;
     }
-    throw e;
+    this.last.set(step.y1);
+    record(this.stats, this.observe(step.y1));
   }
-}
-
-function safeObserve(observe: (y: Float64Array) => Point, y: Float64Array): Point | null {
-  try {
-    return observe(y);
-  } catch {
-    return null;
-  }
-}
-
-function fromVector(y: Float64Array, h_m: number): MissionState {
-  return { t_s: y[T]!, x_m: y[X]!, air_m: y[A]!, h_m, mass_kg: y[M]!, left: y[Q]! };
 }

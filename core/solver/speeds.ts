@@ -9,13 +9,16 @@
  * Every schedule keeps the stall margin: never below settings.stallFactor × V_stall. The
  * search runs over [stallFactor·V_stall, Mach 0.9] (the polar carries no compressibility);
  * a range or endurance optimum that needs more power than available is moved to the speed
- * where the power required meets the power available.
+ * where the power required meets the power available. Best endurance, best glide and best
+ * range in still air are lift coefficients (optimumCL.ts), so no search is needed there; best
+ * range in wind and best climb are bounded 1-D searches (optimize1d.ts), warm-started from
+ * the answer at the previous state.
  */
-import { dragCoefficient, maxLiftToDrag } from '../polar.ts';
-import { availableThrustPower_W, consumptionRate } from '../propulsion/index.ts';
+import type { PolarCoefficients } from '../polar.ts';
 import { G0 } from '../units.ts';
 import type { Ambient, FlightModel } from './model.ts';
 import { maximizeBounded, rootBracketed } from './optimize1d.ts';
+import { availablePower_W, consumption } from './power.ts';
 import { alongTrackSpeed } from './wind.ts';
 
 /** Highest Mach number searched: the parabolic polar says nothing about transonic drag. */
@@ -29,6 +32,8 @@ export interface SpeedContext {
   crosswind_m_s: number;
   /** A previous optimum at a nearby state: lets the search start from it. */
   guess_m_s?: number;
+  /** The previous optimum lay at this end of the speed range: check there first. */
+  boundHint?: 'lo' | 'hi';
 }
 
 export interface SpeedChoice {
@@ -37,6 +42,14 @@ export interface SpeedChoice {
   optimum_m_s: number;
   /** What moved the speed off the optimum. */
   limitedBy: 'stall' | 'power' | 'mach' | null;
+  /** Where the optimum of the objective lies in the searched range ('lo'/'hi': at that end). */
+  optimumAt?: 'lo' | 'hi' | null;
+}
+
+/** CD = CD0 + k·(CL − CLminD)² without re-validating the coefficients (core/polar.ts). */
+export function dragCoefficientOf(c: PolarCoefficients, CL: number): number {
+  const d = CL - c.CLminD;
+  return c.CD0 + c.k * d * d;
 }
 
 /** Drag in level flight at TAS V: D = ½ρV²S·CD(CL), CL = 2W/(ρV²S). */
@@ -44,15 +57,15 @@ export function levelDrag_N(ctx: SpeedContext, V: number): number {
   const q = 0.5 * ctx.amb.atm.rho_kg_m3 * V * V;
   const S = ctx.model.S_m2;
   const CL = (ctx.mass_kg * G0) / (q * S);
-  return q * S * dragCoefficient(ctx.model.polar, CL);
+  return q * S * dragCoefficientOf(ctx.model.polar, CL);
 }
 
 function rateAt(ctx: SpeedContext, thrustPower_W: number, V: number): number {
-  return consumptionRate(ctx.model.pp, thrustPower_W, V, ctx.amb.atm, ctx.amb.pressureAltitude_m);
+  return consumption(ctx.model.power, ctx.amb.engineMax, thrustPower_W, V);
 }
 
 function availableAt(ctx: SpeedContext, V: number): number {
-  return availableThrustPower_W(ctx.model.pp, ctx.amb.atm, ctx.amb.pressureAltitude_m, V);
+  return availablePower_W(ctx.model.power, ctx.amb.engineMax, V);
 }
 
 /** The lowest speed allowed: settings.stallFactor × V_stall (clean CLmax). */
@@ -68,23 +81,44 @@ function searchBounds(ctx: SpeedContext): [number, number] {
   return [stallMarginTas(ctx), MACH_CAP * ctx.amb.atm.a_m_s];
 }
 
+const LIMIT_OF = { lo: 'stall', hi: 'mach' } as const;
+
 function choose(ctx: SpeedContext, f: (V: number) => number, powerLimited: boolean): SpeedChoice {
   const [lo, hi] = searchBounds(ctx);
-  if (!(hi > lo)) return { tas_m_s: lo, optimum_m_s: lo, limitedBy: 'mach' };
-  const m = maximizeBounded(f, lo, hi, ctx.guess_m_s);
-  const limitedBy = m.atBound === 'lo' ? 'stall' : m.atBound === 'hi' ? 'mach' : null;
-  const choice: SpeedChoice = { tas_m_s: m.x, optimum_m_s: m.x, limitedBy };
+  if (!(hi > lo)) return { tas_m_s: lo, optimum_m_s: lo, limitedBy: 'mach', optimumAt: 'hi' };
+  const m = maximizeBounded(f, lo, hi, ctx.guess_m_s, ctx.boundHint);
+  const limitedBy = m.atBound === null ? null : LIMIT_OF[m.atBound];
+  const choice: SpeedChoice = { tas_m_s: m.x, optimum_m_s: m.x, limitedBy, optimumAt: m.atBound };
   if (powerLimited) limitToPower(ctx, choice, lo, hi);
+  return choice;
+}
+
+/** The speed flying at lift coefficient CL, kept inside the search range (still air). */
+function atLiftCoefficient(ctx: SpeedContext, CL: number): SpeedChoice {
+  const [lo, hi] = searchBounds(ctx);
+  const V = Math.sqrt((2 * ctx.mass_kg * G0) / (ctx.amb.atm.rho_kg_m3 * ctx.model.S_m2 * CL));
+  let choice: SpeedChoice;
+  if (!(hi > lo)) choice = { tas_m_s: lo, optimum_m_s: lo, limitedBy: 'mach', optimumAt: 'hi' };
+  else if (V <= lo) choice = { tas_m_s: lo, optimum_m_s: lo, limitedBy: 'stall', optimumAt: 'lo' };
+  else if (V >= hi) choice = { tas_m_s: hi, optimum_m_s: hi, limitedBy: 'mach', optimumAt: 'hi' };
+  else choice = { tas_m_s: V, optimum_m_s: V, limitedBy: null, optimumAt: null };
+  if (hi > lo) limitToPower(ctx, choice, lo, hi);
   return choice;
 }
 
 /**
  * Best range: maximise ground speed along the course per unit consumption rate, i.e. ground
- * distance per kg of fuel (fuel burners) or per J of battery energy (electric).
+ * distance per kg of fuel (fuel burners) or per J of battery energy (electric). In still air
+ * the optimum is a lift coefficient (optimumCL.ts) unless an idle floor flattens the
+ * consumption there; otherwise a bounded 1-D search.
  */
 export function bestRangeTas(ctx: SpeedContext): SpeedChoice {
   const hw = ctx.headwind_m_s;
   const cw = ctx.crosswind_m_s;
+  if (hw === 0 && cw === 0) {
+    const choice = atLiftCoefficient(ctx, ctx.model.optimumCL.range);
+    if (choice.limitedBy !== null || aboveIdle(ctx, choice.tas_m_s)) return choice;
+  }
   return choose(
     ctx,
     (V) => alongTrackSpeed(V, hw, cw) / rateAt(ctx, levelDrag_N(ctx, V) * V, V),
@@ -92,23 +126,22 @@ export function bestRangeTas(ctx: SpeedContext): SpeedChoice {
   );
 }
 
+/** The demand at V is above the idle floor (so consumption follows it). */
+function aboveIdle(ctx: SpeedContext, V: number): boolean {
+  const P = levelDrag_N(ctx, V) * V;
+  const idle = rateAt(ctx, 0, V);
+  return idle === 0 || rateAt(ctx, P, V) > idle * (1 + 1e-9);
+}
+
 /**
- * Best endurance: least fuel flow or battery drain per unit time. Where the engine would run
- * below idle, every slow enough speed costs the same idle flow; the speed of least demand
- * (thrust for a jet, thrust power otherwise — the optimum of the unfloored model) is taken,
- * so that the choice stays a smooth function of the state.
+ * Best endurance: least fuel flow or battery drain per unit time. Every consumption model
+ * grows with its demand (thrust for a jet, thrust power otherwise), so the optimum is the
+ * speed of least demand, a lift coefficient (optimumCL.ts) whatever the wind. Where the
+ * engine would run below idle, every slow enough speed costs the same idle flow; the speed of
+ * least demand is still taken, so that the choice stays a smooth function of the state.
  */
 export function bestEnduranceTas(ctx: SpeedContext): SpeedChoice {
-  const power = (V: number) => levelDrag_N(ctx, V) * V;
-  const choice = choose(ctx, (V) => -rateAt(ctx, power(V), V), true);
-  const V = choice.tas_m_s;
-  const idle = rateAt(ctx, 0, V);
-  if (idle > 0 && rateAt(ctx, power(V), V) <= idle * (1 + 1e-9)) {
-    const demand =
-      ctx.model.pp.type === 'jet' ? (v: number) => -levelDrag_N(ctx, v) : (v: number) => -power(v);
-    return choose(ctx, demand, true);
-  }
-  return choice;
+  return atLiftCoefficient(ctx, ctx.model.optimumCL.endurance);
 }
 
 /** Best rate of climb at a throttle setting: most excess thrust power τ·P_avail − D·V. */
@@ -119,12 +152,12 @@ export function bestClimbTas(ctx: SpeedContext, throttle: number): SpeedChoice {
 /** Best glide: the (L/D)max speed, V = √(2W/(ρ·S·CL*)) (Anderson, Introduction to Flight, ch. 6). */
 export function bestGlideTas(ctx: SpeedContext): SpeedChoice {
   const { model, amb } = ctx;
-  const CL = maxLiftToDrag(model.polar).CL;
+  const CL = model.optimumCL.glide;
   const V = Math.sqrt((2 * ctx.mass_kg * G0) / (amb.atm.rho_kg_m3 * model.S_m2 * CL));
   const [lo] = searchBounds(ctx);
   return V < lo
-    ? { tas_m_s: lo, optimum_m_s: V, limitedBy: 'stall' }
-    : { tas_m_s: V, optimum_m_s: V, limitedBy: null };
+    ? { tas_m_s: lo, optimum_m_s: V, limitedBy: 'stall', optimumAt: 'lo' }
+    : { tas_m_s: V, optimum_m_s: V, limitedBy: null, optimumAt: null };
 }
 
 /**

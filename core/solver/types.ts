@@ -75,19 +75,40 @@ export interface LegResult {
 }
 
 export interface Check {
-  /** Stable id, e.g. `mtow`, `tank`, `reserve`, `stall:3`, `power:3`, `ceiling:3`, `socFloor`. */
+  /**
+   * Stable id: `mtow`, `tank`, `reserve`, `socFloor`, `ceiling` (plan-level: the highest
+   * altitude of the mission), per leg `stall:3`, `power:3`, `climb:3`, and with an airfield
+   * `takeoffRun`, `launch`, `landingRun`.
+   */
   id: string;
   label: string;
   legIndex: number | null;
   /** The value compared and its limit, SI; `quantity` tells how to format them. */
   value: number;
   limit: number;
-  quantity: 'mass' | 'fuelMass' | 'energy' | 'ratio' | 'power' | 'altitude' | 'verticalSpeed' | 'volume';
+  quantity:
+    | 'mass'
+    | 'fuelMass'
+    | 'energy'
+    | 'ratio'
+    | 'power'
+    | 'altitude'
+    | 'verticalSpeed'
+    | 'volume'
+    | 'distance';
   /** Relative margin: (limit − value)/limit for upper limits, (value − limit)/limit for lower ones. */
   margin: number;
   state: CheckState;
-  /** One plain sentence for the verdict list. */
+  /** One plain sentence for the verdict list, in SI (describe.ts words it in any unit system). */
   detail: string;
+  /** The leg the sentence names: the leg checked, or for `ceiling` the leg that goes highest. */
+  subject?: string;
+  /** Safety factor already applied to `value` (runway checks: value = factor × distance). */
+  factor?: number;
+  /** Why the numbers could not be worked out (e.g. the take-off run cannot reach lift-off); the check fails. */
+  reason?: string;
+  /** The reserve check of a mission that was not completed: it fails whatever the numbers say. */
+  incomplete?: boolean;
 }
 
 export interface ReserveBreakdown {

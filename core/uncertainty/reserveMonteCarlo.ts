@@ -1,20 +1,21 @@
 /**
  * Monte Carlo of the landing reserve: how sure is it that the plan lands with its reserve?
  *
- * Each sample perturbs the plan (spreads.ts) with an xoroshiro128+ stream from a random seed (random.ts),
- * solves it with the mission solver (core/solver/solve.ts) and records the landing margin =
- * amount left on landing − reserve required (kg of fuel, or J of usable battery energy). A
- * sample whose plan fails (a leg cannot be flown) counts as a reserve not kept, as does one the
- * solver reports as not keeping it (`reserve.kept`). Percentiles
- * and the mean are over the completed samples (Hyndman–Fan definition 7, stats.ts); the
- * probability of not keeping the reserve is over all samples. Input importance is Spearman's
- * rank correlation between each drawn input and the margin, failed samples ranked below
- * every completed one (tied) — a monotone, scale-free measure; it understates inputs whose
- * effect is not monotone (a wind direction swinging from head- to tailwind).
+ * Each sample perturbs the plan (spreads.ts) with an xoroshiro128+ stream from a random seed
+ * (random.ts), solves it with the mission solver (core/solver/solve.ts, 'fast' tolerance
+ * unless asked) and records the landing margin = amount left on landing − reserve required
+ * (kg of fuel, or J of usable battery energy). A sample whose plan fails (a leg cannot be
+ * flown) counts as a reserve not kept, as does one the solver reports as not keeping it
+ * (`reserve.kept`). Percentiles and the mean are over the completed samples (Hyndman–Fan
+ * definition 7, stats.ts); the probability of not keeping the reserve is over all samples.
+ * Input importance is Spearman's rank correlation between each drawn input and the margin,
+ * failed samples ranked below every completed one (tied) — a monotone, scale-free measure;
+ * it understates inputs whose effect is not monotone (a wind direction swinging from head-
+ * to tailwind).
  */
 import { InputError, requireFinite } from '../errors.ts';
 import type { Plan } from '../plan/schema.ts';
-import { solvePlan } from '../solver/solve.ts';
+import { solvePlan, type SolveTolerance } from '../solver/solve.ts';
 import type { Consumable, PlanResult } from '../solver/types.ts';
 import { normalSource } from './random.ts';
 import { checkSpreads, perturbPlan, type ReserveSpreads } from './spreads.ts';
@@ -27,6 +28,11 @@ export interface MonteCarloOptions {
   seed?: number;
   /** Passed to solvePlan; chart series are not needed here, so 2 if omitted. */
   samplesPerLeg?: number;
+  /**
+   * Passed to solvePlan; 'fast' (relative tolerance 1e-6) if omitted: the spreads of the
+   * inputs are orders of magnitude larger than that.
+   */
+  tolerance?: SolveTolerance;
 }
 
 export interface Distribution {
@@ -97,7 +103,10 @@ export function reserveMonteCarlo(
   const samples = requireFinite('samples', options.samples ?? 2000, 1, 100_000);
   if (!Number.isInteger(samples)) throw new InputError('samples', samples, 'a whole number');
   const seed = options.seed ?? 1;
-  const solveOptions = { samplesPerLeg: options.samplesPerLeg ?? 2 };
+  const solveOptions = {
+    samplesPerLeg: options.samplesPerLeg ?? 2,
+    tolerance: options.tolerance ?? 'fast',
+  };
   const rng = normalSource(seed);
 
   const nominalResult = solvePlan(plan, solveOptions);

@@ -12,6 +12,7 @@ import { formatQuantity } from '../../core/format.ts';
 import { parsePlanText } from '../../core/plan/load.ts';
 import { solvePlan } from '../../core/solver/solve.ts';
 import type { PlanResult } from '../../core/solver/types.ts';
+import { reserveMonteCarlo } from '../../core/uncertainty/reserveMonteCarlo.ts';
 import type { UnitSystemId } from '../../core/units.ts';
 import { DEMO_FILES, demoJson, examplePath, setAt } from '../core/plan/demoPlans.ts';
 
@@ -235,5 +236,66 @@ describe('the installed command', () => {
     });
     expect(child.status).toBe(2);
     expect(child.stderr).toBe('legwise: cannot read examples/none.json: no such file\n');
+  });
+});
+
+describe('legwise solve --monte-carlo', () => {
+  // The survey UAV with its own uncertainty block: 200 samples keep the test quick.
+  const uncertainty = {
+    windSpeed_m_s: 3,
+    windDirection_deg: 20,
+    cd0: 0.08,
+    efficiency: 0.05,
+    fuelConsumption: 0,
+    batteryCapacity: 0.08,
+    payload_kg: 0.2,
+    samples: 200,
+    seed: 7,
+  };
+  const data = demoJson('survey-uav-electric.json');
+  setAt(data, 'uncertainty', uncertainty);
+  const files = { 'mc.json': JSON.stringify(data) };
+  const plan = (() => {
+    const r = parsePlanText(files['mc.json']);
+    if (!r.ok) throw new Error('mc.json');
+    return r.plan;
+  })();
+  const { samples, seed, ...spreads } = uncertainty;
+  // The CLI must print what core/uncertainty computes for the same setup.
+  const mc = reserveMonteCarlo(plan, spreads, { samples, seed });
+
+  it('prints how many of 100 flights keep the reserve, and the margin percentiles', () => {
+    const { code, out, err } = run(['solve', 'mc.json', '--monte-carlo'], files);
+    expect(err).toBe('');
+    expect(code).toBe(0);
+    const kept = Math.floor(100 * (1 - mc.probabilityReserveNotKept));
+    expect(out).toContain(`In ${kept} of 100 simulated flights the reserve is kept.`);
+    expect(out).toContain('200 simulated flights (random seed 7)');
+    expect(out).toContain(`p50 ${formatQuantity(mc.margin!.p50, 'energy', 'si')}`);
+    expect(out.trimEnd().endsWith(CAUTION)).toBe(true);
+  });
+
+  it('--json carries the whole Monte Carlo result', () => {
+    const { code, out } = run(['solve', 'mc.json', '--monte-carlo', '--json'], files);
+    expect(code).toBe(0);
+    const json = JSON.parse(out) as {
+      monteCarlo: { samples: number; probabilityReserveNotKept: number };
+    };
+    expect(json.monteCarlo.samples).toBe(200);
+    expect(json.monteCarlo.probabilityReserveNotKept).toBe(mc.probabilityReserveNotKept);
+  });
+
+  it('is refused with --csv and outside solve', () => {
+    expect(run(['solve', 'mc.json', '--monte-carlo', '--csv'], files).code).toBe(2);
+    expect(run(['tune', 'mc.json', '--monte-carlo'], files).code).toBe(2);
+  });
+});
+
+describe('check sentences in the chosen units', () => {
+  it('aviation units: power in hp and altitudes in ft, no raw watts', () => {
+    const { out } = run(['solve', examplePath('piston-tourer.json'), '--units', 'aviation']);
+    expect(out).toMatch(/needs \d+(\.\d+)? hp of thrust power, \d+(\.\d+)? hp available\./);
+    expect(out).toMatch(/Highest altitude \d+ ft .* against a ceiling of \d+ ft\./);
+    expect(out).not.toMatch(/\d W of thrust power/);
   });
 });

@@ -101,12 +101,25 @@ describe('feasibility checks, each broken on purpose', () => {
     expect(r.verdict).toBe('fails');
   });
 
-  it('climbing above the aircraft ceiling fails the ceiling check', () => {
-    const r = solvePlan(makePlan('propeller', [climb({ toAltitude_m: 5500 })]));
-    expect(r.legs[0]!.status).toBe('flown');
-    const c = check(r, 'ceiling:0')!;
+  it('climbing above the aircraft ceiling fails the one plan-level ceiling check', () => {
+    const r = solvePlan(
+      makePlan('propeller', [
+        climb({ toAltitude_m: 3000 }),
+        cruise({ end: { by: 'distance', distance_m: 20_000 } }),
+        climb({ toAltitude_m: 5500 }),
+        cruise({ end: { by: 'distance', distance_m: 20_000 } }),
+      ]),
+    );
+    expect(r.legs[2]!.status).toBe('flown');
+    const ceilings = r.checks.filter((c) => c.id.startsWith('ceiling'));
+    expect(ceilings.map((c) => c.id)).toEqual(['ceiling']);
+    const c = ceilings[0]!;
     expect(c.state).toBe('fails');
+    expect(c.legIndex).toBeNull();
+    // The highest point is the top of the second climb (5500 m, the fixture's ceiling is 5000 m).
     expect(c.value).toBeCloseTo(5500, 6);
+    expect(c.limit).toBe(5000);
+    expect(c.subject).toMatch(/^Leg 3 /);
     expect(check(r, 'climb:0')!.quantity).toBe('verticalSpeed');
   });
 

@@ -46,6 +46,29 @@ describe('reserveMonteCarlo', () => {
     expect(a.samples).toBe(60);
   });
 
+  it("solves with the 'fast' tolerance unless asked, within 1e-5 of 'precise'", () => {
+    const spreads = spreadsFromDefaults(piston);
+    const fast = reserveMonteCarlo(piston, spreads, { samples: 40, seed: 5 });
+    const precise = reserveMonteCarlo(piston, spreads, {
+      samples: 40,
+      seed: 5,
+      tolerance: 'precise',
+    });
+    // Same random draws; the precise solutions (relative tolerance 1e-9) as reference.
+    const f = fast.remaining!;
+    const p = precise.remaining!;
+    for (const k of ['min', 'p5', 'p50', 'p95', 'max'] as const) {
+      expect(rel(f[k], p[k])).toBeLessThan(1e-5);
+    }
+    expect(fast.probabilityReserveNotKept).toBe(precise.probabilityReserveNotKept);
+    const explicit = reserveMonteCarlo(piston, spreads, {
+      samples: 40,
+      seed: 5,
+      tolerance: 'fast',
+    });
+    expect(explicit).toEqual(fast);
+  });
+
   it("converges to solvePlan's landing margin as the spreads go to 0", () => {
     for (const plan of [piston, uav]) {
       const det = solvePlan(plan);

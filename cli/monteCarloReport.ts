@@ -1,0 +1,60 @@
+/**
+ * `legwise solve --monte-carlo`: the reserve Monte Carlo (core/uncertainty) after the solve —
+ * percentiles of the landing margin over the reserve, how often the reserve is kept in plain
+ * words, and the inputs that matter most. Spreads, samples and random seed come from the
+ * plan's `uncertainty` block, or the defaults of core/uncertainty/spreads.ts.
+ */
+import { formatQuantity } from '../core/format.ts';
+import type { Plan } from '../core/plan/schema.ts';
+import {
+  reserveMonteCarlo,
+  type ReserveMonteCarloResult,
+} from '../core/uncertainty/reserveMonteCarlo.ts';
+import { monteCarloSetup } from '../core/uncertainty/spreads.ts';
+import type { UnitSystemId } from '../core/units.ts';
+
+export function runMonteCarlo(plan: Plan): ReserveMonteCarloResult {
+  const { spreads, samples, seed } = monteCarloSetup(plan);
+  return reserveMonteCarlo(plan, spreads, { samples, seed });
+}
+
+/**
+ * "In N of 100 simulated flights the reserve is kept." N is rounded down, so a reserve
+ * missed in even one sample never reads as 100 of 100.
+ */
+export function keptSentence(mc: ReserveMonteCarloResult): string {
+  const kept = 1 - mc.probabilityReserveNotKept;
+  const n = kept >= 1 ? 100 : Math.floor(100 * kept);
+  return `In ${n} of 100 simulated flights the reserve is kept.`;
+}
+
+export function renderMonteCarloText(mc: ReserveMonteCarloResult, units: UnitSystemId): string {
+  const q = mc.consumable === 'fuel' ? 'fuelMass' : 'energy';
+  const f = (v: number) => formatQuantity(v, q, units);
+  const lines = [
+    `Reserve Monte Carlo: ${mc.samples} simulated flights (random seed ${mc.seed})`,
+    `  ${keptSentence(mc)}`,
+  ];
+  const notKept = Math.round(mc.probabilityReserveNotKept * mc.samples);
+  lines.push(
+    `  Reserve not kept in ${notKept} of ${mc.samples} samples` +
+      (mc.failedFraction > 0
+        ? `, ${Math.round(mc.failedFraction * mc.samples)} of them with a leg that cannot be flown.`
+        : '.'),
+  );
+  const d = mc.margin;
+  if (d === null) {
+    lines.push('  No simulated flight completed the mission.');
+  } else {
+    lines.push(`  Landing margin over the reserve (${mc.completedSamples} completed flights):`);
+    lines.push(`    p5 ${f(d.p5)} · p50 ${f(d.p50)} · p95 ${f(d.p95)} (lowest ${f(d.min)})`);
+  }
+  const top = mc.importance.filter((i) => Math.abs(i.rho) >= 0.1).slice(0, 3);
+  if (top.length > 0) {
+    const words = top.map(
+      (i) => `${i.input} (${i.rho >= 0 ? '+' : '−'}${Math.abs(i.rho).toFixed(2)})`,
+    );
+    lines.push(`  Inputs that matter most (rank correlation with the margin): ${words.join(', ')}`);
+  }
+  return `${lines.join('\n')}\n`;
+}

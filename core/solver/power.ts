@@ -1,0 +1,148 @@
+/**
+ * The powerplant as the integrator's right-hand side sees it: the models of
+ * core/propulsion/index.ts (jet T_max = T_SL·σ^n and TSFC·T; propeller Gagg–Ferrar or σ^n
+ * lapse and BSFC·P; electric chain efficiency and Traub's 2011 Peukert drain), evaluated
+ * without re-validating the plan's constants on every call.
+ *
+ * Why: the propulsion functions check every argument (InputError), which is right at an API
+ * boundary but costs more than the physics inside an ODE right-hand side evaluated thousands
+ * of times per solve. Here the constants are validated once, when the model is built
+ * (`powerConstants` calls the propulsion functions themselves), and the altitude-dependent
+ * maximum (T_max or P_max) once per altitude (`engineMaximum`, cached with the ambient).
+ * test/core/solver/power.test.ts checks that both paths give the same numbers.
+ */
+import type { AtmosphereState } from '../atmosphere.ts';
+import type { Powerplant } from '../plan/schema.ts';
+import {
+  availableThrustPower_W,
+  chainEfficiency,
+  consumptionRate,
+  maxShaftPower_W,
+  maxThrust_N,
+} from '../propulsion/index.ts';
+
+/** Plan constants of the powerplant, validated once. */
+export interface PowerConstants {
+  type: Powerplant['type'];
+  /** Jet: TSFC kg/(N·s); propeller: BSFC kg/J; electric: 0. */
+  sfc: number;
+  /** Jet: idle fraction of T_max; propeller: idle fraction of P_max; electric: 0. */
+  idleFraction: number;
+  /** Propeller and electric: propeller efficiency; jet: 1. */
+  propEfficiency: number;
+  /** Electric: motor × controller × propeller efficiency; others 1. */
+  chainEfficiency: number;
+  /** Electric: Peukert exponent n and Rt/E_nominal (s/J); others 1 and 0. */
+  peukertExponent: number;
+  ratedTimeOverEnergy_s_J: number;
+}
+
+/** Validates the powerplant through core/propulsion (throws InputError) and keeps its constants. */
+export function powerConstants(pp: Powerplant, seaLevel: AtmosphereState): PowerConstants {
+  // One call of each propulsion function checks every constant they use.
+  availableThrustPower_W(pp, seaLevel, 0, 1);
+  consumptionRate(pp, 1, 1, seaLevel, 0);
+  switch (pp.type) {
+    case 'jet':
+      return {
+        type: 'jet',
+        sfc: pp.tsfc_kg_Ns,
+        idleFraction: pp.idleFuelFraction,
+        propEfficiency: 1,
+        chainEfficiency: 1,
+        peukertExponent: 1,
+        ratedTimeOverEnergy_s_J: 0,
+      };
+    case 'propeller':
+      return {
+        type: 'propeller',
+        sfc: pp.bsfc_kg_J,
+        idleFraction: pp.idlePowerFraction,
+        propEfficiency: pp.propEfficiency,
+        chainEfficiency: 1,
+        peukertExponent: 1,
+        ratedTimeOverEnergy_s_J: 0,
+      };
+    case 'electric':
+      return {
+        type: 'electric',
+        sfc: 0,
+        idleFraction: 0,
+        propEfficiency: pp.propEfficiency,
+        chainEfficiency: chainEfficiency(pp),
+        peukertExponent: pp.battery.peukertExponent,
+        ratedTimeOverEnergy_s_J: pp.battery.ratedDischargeTime_s / pp.battery.energy_J,
+      };
+  }
+}
+
+/**
+ * The altitude-dependent maximum of the engine: T_max (N) for a jet, shaft P_max (W) for a
+ * propeller engine (with its lapse and critical altitude), the motor's shaft power (W) for
+ * electric (no lapse).
+ */
+export function engineMaximum(
+  pp: Powerplant,
+  atm: AtmosphereState,
+  pressureAltitude_m: number,
+): number {
+  switch (pp.type) {
+    case 'jet':
+      return maxThrust_N(pp, atm);
+    case 'propeller':
+      return maxShaftPower_W(pp, atm, pressureAltitude_m);
+    case 'electric':
+      return pp.maxShaftPower_W;
+  }
+}
+
+/** Maximum thrust power at TAS V: jet T_max·V, otherwise η_prop·P_max. */
+export function availablePower_W(c: PowerConstants, engineMax: number, V_m_s: number): number {
+  return c.type === 'jet' ? engineMax * V_m_s : c.propEfficiency * engineMax;
+}
+
+/**
+ * Consumption for a thrust power (≤ 0 means idle): fuel kg/s (jet TSFC·max(T, idle·T_max);
+ * propeller BSFC·max(P/η, idle·P_max)) or battery drain W (electric, Peukert applied).
+ */
+export function consumption(
+  c: PowerConstants,
+  engineMax: number,
+  thrustPower_W: number,
+  V_m_s: number,
+): number {
+  const demand = thrustPower_W > 0 ? thrustPower_W : 0;
+  switch (c.type) {
+    case 'jet':
+      return c.sfc * Math.max(demand / V_m_s, c.idleFraction * engineMax);
+    case 'propeller':
+      return c.sfc * Math.max(demand / c.propEfficiency, c.idleFraction * engineMax);
+    case 'electric': {
+      const P = demand / c.chainEfficiency;
+      if (P === 0 || c.peukertExponent === 1) return P;
+      return P * Math.pow(P * c.ratedTimeOverEnergy_s_J, c.peukertExponent - 1);
+    }
+  }
+}
+
+/**
+ * How far the demand is above the idle floor, as a fraction of the maximum: jet
+ * (P/V − idle·T_max)/T_max, propeller (P/η − idle·P_max)/P_max, electric P/(η·P_max) (its
+ * floor is at zero thrust power). The consumption has a kink where this crosses 0; the integrator
+ * restarts there instead of stepping across it (segment.ts).
+ */
+export function idleExcess(
+  c: PowerConstants,
+  engineMax: number,
+  thrustPower_W: number,
+  V_m_s: number,
+): number {
+  switch (c.type) {
+    case 'jet':
+      return thrustPower_W / V_m_s / engineMax - c.idleFraction;
+    case 'propeller':
+      return thrustPower_W / c.propEfficiency / engineMax - c.idleFraction;
+    case 'electric':
+      return thrustPower_W / (c.propEfficiency * engineMax);
+  }
+}
