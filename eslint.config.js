@@ -19,7 +19,10 @@ export default tseslint.config(
   },
   {
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
       'vue/multi-word-component-names': 'off',
       'vue/max-attributes-per-line': 'off',
       'vue/singleline-html-element-content-newline': 'off',
@@ -32,7 +35,19 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: ['node:*', 'fs', 'path', 'os', 'electron', 'vue', 'chart.js', '../renderer/*', '../electron/*'] },
+        {
+          patterns: [
+            'node:*',
+            'fs',
+            'path',
+            'os',
+            'electron',
+            'vue',
+            'chart.js',
+            '../renderer/*',
+            '../electron/*',
+          ],
+        },
       ],
       'no-restricted-globals': ['error', 'window', 'document', 'process', 'Date', 'localStorage'],
     },

@@ -28,12 +28,22 @@ function formatValue(value: unknown): string {
 }
 
 /** Throws InputError unless `value` is a finite number within [min, max]. */
-export function requireFinite(field: string, value: number, min = -Infinity, max = Infinity, unit = ''): number {
+export function requireFinite(
+  field: string,
+  value: number,
+  min = -Infinity,
+  max = Infinity,
+  unit = '',
+): number {
   const u = unit ? ` ${unit}` : '';
   if (!Number.isFinite(value)) throw new InputError(field, value, `a finite number${u}`);
   if (value < min || value > max) {
     const limit =
-      min === -Infinity ? `at most ${max}${u}` : max === Infinity ? `at least ${min}${u}` : `between ${min} and ${max}${u}`;
+      min === -Infinity
+        ? `at most ${max}${u}`
+        : max === Infinity
+          ? `at least ${min}${u}`
+          : `between ${min} and ${max}${u}`;
     throw new InputError(field, value, limit);
   }
   return value;
@@ -42,6 +52,7 @@ export function requireFinite(field: string, value: number, min = -Infinity, max
 /** Throws InputError unless `value` is finite and strictly positive. */
 export function requirePositive(field: string, value: number, unit = ''): number {
   const u = unit ? ` ${unit}` : '';
-  if (!Number.isFinite(value) || value <= 0) throw new InputError(field, value, `a finite number above 0${u}`);
+  if (!Number.isFinite(value) || value <= 0)
+    throw new InputError(field, value, `a finite number above 0${u}`);
   return value;
 }

@@ -107,7 +107,11 @@ export const ElectricSchema = z.object({
   battery: BatterySchema,
 });
 
-export const PowerplantSchema = z.discriminatedUnion('type', [JetSchema, PropellerSchema, ElectricSchema]);
+export const PowerplantSchema = z.discriminatedUnion('type', [
+  JetSchema,
+  PropellerSchema,
+  ElectricSchema,
+]);
 
 /** Aircraft data for field performance. */
 export const FieldDataSchema = z.object({
@@ -206,7 +210,13 @@ export const SettingsSchema = z.object({
 });
 
 /** Runway surface; friction coefficients in core/field/surfaces.ts (common practice). */
-export const SurfaceSchema = z.enum(['dryHard', 'wetHard', 'shortDryGrass', 'longGrass', 'softGround']);
+export const SurfaceSchema = z.enum([
+  'dryHard',
+  'wetHard',
+  'shortDryGrass',
+  'longGrass',
+  'softGround',
+]);
 
 /** A runway at the departure or arrival field. Elevation comes from `environment`. */
 export const RunwaySchema = z.object({
@@ -257,7 +267,11 @@ export const UncertaintySchema = z.object({
   batteryCapacity: fraction(0, 0.5),
   payload_kg: bounded(0, 10_000, 'kg'),
   samples: z.number().int().min(100).max(20_000),
-  seed: z.number().int().min(0).max(2 ** 31 - 1),
+  seed: z
+    .number()
+    .int()
+    .min(0)
+    .max(2 ** 31 - 1),
 });
 
 /** A fixed airspeed: TAS, EAS or CAS in m/s, or a Mach number. */
@@ -290,8 +304,16 @@ const track = {
   toWaypoint: z.string().min(1).max(64).optional(),
 };
 
-export const TakeoffLegSchema = z.object({ kind: z.literal('takeoff'), ...legBase, allowance: Allowance });
-export const LandingLegSchema = z.object({ kind: z.literal('landing'), ...legBase, allowance: Allowance });
+export const TakeoffLegSchema = z.object({
+  kind: z.literal('takeoff'),
+  ...legBase,
+  allowance: Allowance,
+});
+export const LandingLegSchema = z.object({
+  kind: z.literal('landing'),
+  ...legBase,
+  allowance: Allowance,
+});
 
 export const ClimbLegSchema = z.object({
   kind: z.literal('climb'),
@@ -327,7 +349,10 @@ export const LoiterLegSchema = z.object({
     /** As long as the rest of the plan and the reserve policy still allow. */
     z.object({ by: z.literal('reserve') }),
   ]),
-  speed: z.discriminatedUnion('kind', [z.object({ kind: z.literal('bestEndurance') }), ...FixedSpeed]),
+  speed: z.discriminatedUnion('kind', [
+    z.object({ kind: z.literal('bestEndurance') }),
+    ...FixedSpeed,
+  ]),
 });
 
 export const DescentLegSchema = z.object({
@@ -336,7 +361,11 @@ export const DescentLegSchema = z.object({
   ...track,
   toAltitude_m: bounded(-400, 20_000, 'm'),
   mode: z.discriminatedUnion('by', [
-    z.object({ by: z.literal('rate'), rate_m_s: bounded(0, 50, 'm/s', true), speed: FixedSpeedSchema }),
+    z.object({
+      by: z.literal('rate'),
+      rate_m_s: bounded(0, 50, 'm/s', true),
+      speed: FixedSpeedSchema,
+    }),
     /** Power at idle, best-glide speed ((L/D)max). */
     z.object({ by: z.literal('glide') }),
   ]),

@@ -13,7 +13,15 @@ declare const odex: {
       y0: number[],
       x1: number,
       solout?: (n: number, xOld: number, x: number, y: number[]) => boolean | void,
-    ): { y: number[]; outcome: number; nStep: number; xEnd: number; nAccept: number; nReject: number; nEval: number };
+    ): {
+      y: number[];
+      outcome: number;
+      nStep: number;
+      xEnd: number;
+      nAccept: number;
+      nReject: number;
+      nEval: number;
+    };
   };
 };
 export default odex;
