@@ -14,7 +14,7 @@ export const PLAN_SCHEMA_VERSION = 1;
 /** A finite number in [min, max] (or (min, max] with `openMin`), unit named in the message. */
 function bounded(min: number, max: number, unit = '', openMin = false) {
   const u = unit ? ` ${unit}` : '';
-  const range = `${openMin ? 'above' : 'from'} ${min} to ${max}${u}`;
+  const range = openMin ? `above ${min} and at most ${max}${u}` : `from ${min} to ${max}${u}`;
   return z
     .number({ error: `must be a finite number${u}` })
     .refine((v) => (openMin ? v > min : v >= min) && v <= max, { error: `must be ${range}` });

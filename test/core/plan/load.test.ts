@@ -81,10 +81,10 @@ describe('bad plan files are refused with path-named messages', () => {
 
   it('Oswald efficiency outside (0, 1]', () => {
     expect(refusedAt('aircraft.polar.induced.e', 0).message).toMatch(
-      /^aircraft\.polar\.induced\.e: 0 — must be above 0 to 1$/,
+      /^aircraft\.polar\.induced\.e: 0 — must be above 0 and at most 1$/,
     );
     expect(refusedAt('aircraft.polar.induced.e', 1.2).message).toContain(
-      '1.2 — must be above 0 to 1',
+      '1.2 — must be above 0 and at most 1',
     );
   });
 
