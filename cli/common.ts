@@ -9,6 +9,8 @@ export interface CliIo {
   stderr: (text: string) => void;
   /** Reads a file as UTF-8 text; throws like fs.readFileSync. */
   readFile: (path: string) => string;
+  /** Writes UTF-8 text to a file (`solve --gpx`); throws like fs.writeFileSync. */
+  writeFile?: (path: string, text: string) => void;
 }
 
 /** Printed with every result: these are estimates, never a substitute for approved data. */
@@ -22,6 +24,8 @@ export interface OutputOptions {
   csv: boolean;
   /** solve: also run the reserve Monte Carlo. */
   monteCarlo?: boolean;
+  /** solve: write the plan's route with per-waypoint estimates to this GPX file. */
+  gpx?: string;
 }
 
 /** Exit codes: 0 solved and feasible, 1 solved but the verdict fails, 2 bad file or usage. */

@@ -1,20 +1,23 @@
 /**
  * `legwise`: the headless command. `solve` prints a plan's per-leg table, checks and verdict
- * (or JSON / CSV), `tune` runs the optimizers, `check` validates a plan file. All logic sits
+ * (or JSON / CSV; with `--gpx` it also writes the route with per-waypoint estimates),
+ * `tune` runs the optimizers, `check` validates a plan file. All logic sits
  * in `runCli`, which writes through an injected io so tests capture the output; `main` binds
  * it to the process. Exit codes: 0 feasible, 1 solved but failing, 2 bad file or usage.
  */
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { parseArgs } from 'node:util';
 import { InputError } from '../core/errors.ts';
 import { parsePlanText } from '../core/plan/load.ts';
 import type { Plan } from '../core/plan/schema.ts';
 import { solvePlan } from '../core/solver/solve.ts';
+import type { PlanResult } from '../core/solver/types.ts';
 import type { UnitSystemId } from '../core/units.ts';
 import { CAUTION, EXIT_FAILS, EXIT_OK, EXIT_USAGE } from './common.ts';
 import type { CliIo, OutputOptions } from './common.ts';
 import { renderMonteCarloText, runMonteCarlo } from './monteCarloReport.ts';
+import { renderRouteText, routeGpx } from './routeReport.ts';
 import { mergeWarnings, renderSolveCsv, renderSolveJson, renderSolveText } from './solveReport.ts';
 import { renderTuneJson, renderTuneText, runTune } from './tuneReport.ts';
 
@@ -35,6 +38,8 @@ Options
   --monte-carlo        solve: also simulate the flight many times with uncertain wind,
                        drag, efficiency, consumption and payload (the plan's uncertainty
                        block, or defaults) and say how often the reserve is kept
+  --gpx FILE           solve: write the plan's route as GPX 1.1 to FILE, each waypoint
+                       with its estimated time from the start and fuel or energy left
   -h, --help           this text
   -v, --version        the Legwise version
 
@@ -100,16 +105,48 @@ function runSolve(path: string, opts: OutputOptions, io: CliIo): number {
   const loaded = loadPlan(path, io);
   if (loaded === null) return EXIT_USAGE;
   const { plan } = loaded;
+  if (opts.gpx !== undefined && plan.route === undefined) {
+    return usageError(
+      io,
+      `--gpx: ${path} has no route (plan.route) to export; add waypoints to the plan first`,
+    );
+  }
   const result = solvePlan(plan);
   const warnings = mergeWarnings(loaded.warnings, result);
   const mc = opts.monteCarlo ? runMonteCarlo(plan) : null;
   if (opts.json) io.stdout(renderSolveJson(plan, result, warnings, mc));
   else if (opts.csv) io.stdout(renderSolveCsv(result, opts.units));
   else {
-    const extra = mc ? renderMonteCarloText(mc, opts.units) : '';
+    const route = renderRouteText(plan, result, opts.units);
+    const monteCarlo = mc ? renderMonteCarloText(mc, opts.units) : '';
+    const extra = [route, monteCarlo].filter((t) => t !== '').join('\n');
     io.stdout(renderSolveText(plan, result, warnings, opts.units, extra));
   }
+  if (opts.gpx !== undefined && !writeGpxFile(opts.gpx, plan, result, io)) return EXIT_USAGE;
   return result.verdict === 'fails' || !result.completed ? EXIT_FAILS : EXIT_OK;
+}
+
+/** Writes the route's GPX; says what was written (on stderr, so stdout stays parseable). */
+function writeGpxFile(file: string, plan: Plan, result: PlanResult, io: CliIo): boolean {
+  const { text, withEstimates } = routeGpx(plan, result);
+  if (io.writeFile === undefined) {
+    io.stderr('legwise: --gpx: this environment cannot write files\n');
+    return false;
+  }
+  try {
+    io.writeFile(file, text);
+  } catch (err) {
+    const code = (err as { code?: string }).code;
+    io.stderr(`legwise: cannot write ${file}: ${code ?? String(err)}\n`);
+    return false;
+  }
+  const n = plan.route?.waypoints.length ?? 0;
+  io.stderr(
+    withEstimates
+      ? `legwise: wrote ${file}: the route's ${n} waypoints with estimated time and ${result.consumable === 'fuel' ? 'fuel' : 'energy'} left\n`
+      : `legwise: wrote ${file}: the route's ${n} waypoints without estimates — the mission does not reach every waypoint\n`,
+  );
+  return true;
 }
 
 function runTuneCommand(path: string, opts: OutputOptions, io: CliIo): number {
@@ -140,6 +177,7 @@ export function runCli(argv: readonly string[], io: CliIo): number {
         json: { type: 'boolean' },
         csv: { type: 'boolean' },
         'monte-carlo': { type: 'boolean' },
+        gpx: { type: 'string' },
         help: { type: 'boolean', short: 'h' },
         version: { type: 'boolean', short: 'v' },
       },
@@ -171,11 +209,18 @@ export function runCli(argv: readonly string[], io: CliIo): number {
   if (values['monte-carlo'] && (values.csv || command !== 'solve')) {
     return usageError(io, '--monte-carlo: only with solve, and not together with --csv');
   }
+  if (values.gpx !== undefined && command !== 'solve') {
+    return usageError(io, '--gpx: only with solve');
+  }
+  if (values.gpx !== undefined && values.gpx.trim() === '') {
+    return usageError(io, '--gpx: needs a file name');
+  }
   const opts: OutputOptions = {
     units: units as UnitSystemId,
     json: values.json ?? false,
     csv: values.csv ?? false,
     monteCarlo: values['monte-carlo'] ?? false,
+    ...(values.gpx !== undefined ? { gpx: values.gpx } : {}),
   };
   try {
     return COMMANDS[command as keyof typeof COMMANDS](file, opts, io);
@@ -200,6 +245,7 @@ export function main(argv: readonly string[] = process.argv.slice(2)): void {
     stdout: (t) => process.stdout.write(t),
     stderr: (t) => process.stderr.write(t),
     readFile: (p) => readFileSync(p, 'utf8'),
+    writeFile: (p, text) => writeFileSync(p, text, 'utf8'),
   });
 }
 

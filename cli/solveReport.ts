@@ -12,6 +12,7 @@ import {
 } from '../core/format.ts';
 import type { Plan } from '../core/plan/schema.ts';
 import { checkAmount, describeCheck } from '../core/solver/describe.ts';
+import { routeProgress } from '../core/solver/routeProgress.ts';
 import type { CheckState, LegResult, PlanResult, Span } from '../core/solver/types.ts';
 import type { ReserveMonteCarloResult } from '../core/uncertainty/reserveMonteCarlo.ts';
 import type { Quantity, UnitSystemId } from '../core/units.ts';
@@ -248,7 +249,10 @@ export function renderSolveCsv(result: PlanResult, units: UnitSystemId): string 
   return `${lines.join('\n')}\n`;
 }
 
-/** The full result plus the caution and the merged warnings (and the Monte Carlo), as JSON. */
+/**
+ * The full result plus the caution and the merged warnings (and, for a plan with a route,
+ * the per-waypoint estimates; with --monte-carlo, the Monte Carlo), as JSON.
+ */
 export function renderSolveJson(
   plan: Plan,
   result: PlanResult,
@@ -260,6 +264,7 @@ export function renderSolveJson(
     plan: plan.name,
     ...result,
     warnings: [...warnings],
+    ...(plan.route ? { waypoints: routeProgress(plan, result) } : {}),
     ...(monteCarlo ? { monteCarlo } : {}),
   };
   return `${JSON.stringify(out, null, 2)}\n`;

@@ -5,7 +5,10 @@
  * leaves the most fuel or energy on landing wins. Climb and descent costs are included
  * because the whole mission is flown each time. Golden-section refinement around the best
  * grid point (Press et al., Numerical Recipes, §10.2). Infeasible altitudes are marked,
- * never reported as NaN.
+ * never reported as NaN. Legs set to the winds-aloft table fly its wind and temperature at
+ * each trial altitude (the solver's own weather), so a lower level with less headwind can
+ * win; with a route, the cruise to each waypoint absorbs the longer or shorter climb, so
+ * every trial flies the same ground track.
  */
 import { InputError } from '../errors.ts';
 import type { ClimbLeg, Plan } from '../plan/schema.ts';

@@ -4,14 +4,15 @@
  * Introduction to Flight, ch. 6: power required and available, maximum velocity) — with the
  * stall, best-range, best-endurance and maximum-level speeds marked. Best range and best
  * endurance come from the solver's own speed schedules (core/solver/speeds.ts), so the marks
- * are the speeds the solver flies, best range in the leg's wind.
+ * are the speeds the solver flies, best range in the leg's wind (or the winds-aloft table's).
  */
 import { InputError } from '../errors.ts';
-import type { Plan } from '../plan/schema.ts';
-import { ambientAt, buildModel } from '../solver/model.ts';
+import type { Leg, Plan } from '../plan/schema.ts';
+import { courseTrig, crosswindOf, headwindOf } from '../solver/aloft.ts';
+import { ambientAt, buildModel, type Ambient } from '../solver/model.ts';
 import { bestEnduranceTas, bestRangeTas, MACH_CAP } from '../solver/speeds.ts';
 import type { SpeedContext } from '../solver/speeds.ts';
-import { windComponents } from '../solver/wind.ts';
+import { windComponents, type WindComponents } from '../solver/wind.ts';
 import { countOption, solveForSearch } from './planTools.ts';
 import {
   availablePowerAt,
@@ -47,6 +48,19 @@ export interface PowerCurveOptions {
   points?: number;
 }
 
+function legWindAt(legPlan: Leg, course: number | undefined, amb: Ambient): WindComponents {
+  if (!('wind' in legPlan)) return { headwind_m_s: 0, crosswind_m_s: 0 };
+  const course_deg = course ?? legPlan.course_deg;
+  if (!amb.aloft) return windComponents(course_deg, legPlan.wind);
+  const { sinCourse, cosCourse } = courseTrig(course_deg);
+  const e = amb.windEast_m_s;
+  const n = amb.windNorth_m_s;
+  return {
+    headwind_m_s: headwindOf(e, n, sinCourse, cosCourse),
+    crosswind_m_s: crosswindOf(e, n, sinCourse, cosCourse),
+  };
+}
+
 export function powerCurves(
   plan: Plan,
   legIndex: number,
@@ -61,13 +75,14 @@ export function powerCurves(
     throw new InputError(`legs.${legIndex}`, legIndex, 'a leg the plan reaches');
   }
   const { h_m, mass_kg } = leg.start;
-  const cond = flightConditions(plan, h_m, mass_kg);
   const model = buildModel(plan);
-  const wind =
-    'wind' in legPlan
-      ? windComponents(legPlan.course_deg, legPlan.wind)
-      : { headwind_m_s: 0, crosswind_m_s: 0 };
-  const ctx: SpeedContext = { model, mass_kg, amb: ambientAt(model, h_m), ...wind };
+  // The leg's weather as the solver flies it: its own wind, or the winds-aloft table's wind
+  // and air at the leg's altitude; its course from the route when it flies to a waypoint.
+  const aloft = 'windSource' in legPlan && legPlan.windSource === 'aloft' && model.aloft !== null;
+  const cond = flightConditions(plan, h_m, mass_kg, aloft);
+  const amb = ambientAt(model, h_m, aloft);
+  const wind = legWindAt(legPlan, leg.course_deg, amb);
+  const ctx: SpeedContext = { model, mass_kg, amb, ...wind };
 
   const stall_m_s = stallSpeedAt(cond);
   const maxLevel_m_s = maxLevelSpeed(plan, cond);

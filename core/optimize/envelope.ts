@@ -25,10 +25,18 @@ export interface FlightConditions {
   polar: PolarCoefficients;
 }
 
-/** The air at h (the solver's own relation, Hp = h + Hp(QNH), ISA+ΔT) and the weight. */
-export function flightConditions(plan: Plan, h_m: number, mass_kg: number): FlightConditions {
+/**
+ * The air at h (the solver's own relation, Hp = h + Hp(QNH), ISA+ΔT; with `aloft` and a
+ * winds-aloft table, the table's temperature there) and the weight.
+ */
+export function flightConditions(
+  plan: Plan,
+  h_m: number,
+  mass_kg: number,
+  aloft = false,
+): FlightConditions {
   const model = buildModel(plan);
-  const amb = ambientAt(model, h_m);
+  const amb = ambientAt(model, h_m, aloft);
   return {
     h_m,
     pressureAltitude_m: amb.pressureAltitude_m,

@@ -62,6 +62,8 @@ export function speedAltitudeSweep(
   }
   const work = clonePlan(plan);
   const leg = work.legs[legIndex] as CruiseLeg | LoiterLeg;
+  // A leg flying to a waypoint takes its course from the route, as in the mission.
+  if (legStart.course_deg !== undefined) leg.course_deg = legStart.course_deg;
   const model = buildModel(work, options.tolerance ?? 'precise');
   const ctx = { model, index: legIndex, samples: 0 };
   const { mass_kg } = legStart.start;

@@ -121,13 +121,25 @@ function perturbations(plan: Plan): Perturbation[] {
       );
       break;
   }
-  const windy = plan.legs.some((l) => 'wind' in l && l.wind.speed_m_s > 0);
+  const windy = plan.legs.some(
+    (l) => 'wind' in l && l.windSource !== 'aloft' && l.wind.speed_m_s > 0,
+  );
   if (windy) {
     list.push({
       input: 'legs.*.wind.speed_m_s',
       label: 'Wind speeds',
       apply: (p, s) => {
         for (const l of p.legs) if ('wind' in l) l.wind.speed_m_s *= scale(s);
+      },
+    });
+  }
+  const aloftLegs = plan.legs.some((l) => 'windSource' in l && l.windSource === 'aloft');
+  if (aloftLegs && plan.environment.windsAloft?.some((w) => w.speed_m_s > 0)) {
+    list.push({
+      input: 'environment.windsAloft.*.speed_m_s',
+      label: 'Winds-aloft speeds',
+      apply: (p, s) => {
+        for (const w of p.environment.windsAloft ?? []) w.speed_m_s *= scale(s);
       },
     });
   }

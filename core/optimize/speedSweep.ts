@@ -87,7 +87,9 @@ export function legSpeedRange(
   if (start === undefined || base.legs[legIndex]?.status === 'notReached') {
     throw new InputError(`legs.${legIndex}`, legIndex, 'a leg the plan reaches');
   }
-  const cond = flightConditions(plan, start.h_m, start.mass_kg);
+  const leg = plan.legs[legIndex];
+  const aloft = leg !== undefined && 'windSource' in leg && leg.windSource === 'aloft';
+  const cond = flightConditions(plan, start.h_m, start.mass_kg, aloft);
   const stallLimit_m_s = plan.settings.stallFactor * stallSpeedAt(cond);
   const vMax = maxLevelSpeed(plan, cond);
   const hi = Math.min(vMax ?? 0, MAX_TAS_M_S, MAX_MACH * cond.atm.a_m_s);

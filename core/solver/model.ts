@@ -5,6 +5,12 @@
  * Altitudes in a plan are above mean sea level on an altimeter set to QNH; the pressure
  * altitude is then Hp = h + Hp(QNH) (common practice; the relation of core/atmosphere.ts
  * `pressureAltitudeFromQnh`), and the air is the ISA+ΔT day at Hp (core/atmosphere.ts).
+ *
+ * Legs whose weather comes from the winds-aloft table (windSource 'aloft') see the table's
+ * air instead: the wind at Hp (the table is indexed by pressure altitude, as forecasts give
+ * it) and the temperature too — the table's ISA offset, interpolated linearly between the
+ * levels that give one, replaces environment.isaOffset_K (which stays only when no level
+ * gives a temperature). Interpolation and extrapolation as core/weather/windsAloft.ts.
  */
 import { atmosphereAt, densityAltitude, type AtmosphereState } from '../atmosphere.ts';
 import { toTas } from '../airspeed.ts';
@@ -17,6 +23,8 @@ import { G0 } from '../units.ts';
 import { optimumCL, type OptimumCL } from './optimumCL.ts';
 import { engineMaximum, powerConstants, type PowerConstants } from './power.ts';
 import type { Consumable } from './types.ts';
+import { windProfile, type WindProfile } from '../weather/windsAloft.ts';
+import { aloftIsaOffset, aloftWind } from './aloft.ts';
 
 export interface Ambient {
   h_m: number;
@@ -24,6 +32,11 @@ export interface Ambient {
   atm: AtmosphereState;
   /** Jet T_max (N), propeller shaft P_max (W) or electric motor shaft power (W) here. */
   engineMax: number;
+  /** True for the winds-aloft table's air (see the header). */
+  aloft: boolean;
+  /** The table's wind here, east and north components of the air's motion (0 otherwise). */
+  windEast_m_s: number;
+  windNorth_m_s: number;
 }
 
 /**
@@ -60,10 +73,16 @@ export interface FlightModel {
   /** Battery usable energy (J), 0 for fuel burners. */
   readonly usableEnergy_J: number;
   readonly takeoffMass_kg: number;
+  /** The winds-aloft table, prepared once (null when the plan has none). */
+  readonly aloft: WindProfile | null;
+  /** Some leg takes its weather from the table: the reserves are flown in its air too. */
+  readonly aloftReserves: boolean;
   /** Last ambient evaluated (legs at one altitude ask for the same air many times). */
   cache: Ambient | null;
+  /** The same for the table's air. */
+  aloftCache: Ambient | null;
   /** Last answer of altitudeForDensity, the warm start of the next (cruise-climb). */
-  densityCache: { rho_kg_m3: number; Hp_m: number; slope: number } | null;
+  densityCache: { rho_kg_m3: number; Hp_m: number; slope: number; aloft: boolean } | null;
 }
 
 export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): FlightModel {
@@ -78,6 +97,8 @@ export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): F
   const usable = pp.type === 'electric' ? usableEnergy_J(pp.battery) : 0;
   const start = pp.type === 'electric' ? usable : pp.fuel.load_kg;
   const carried = pp.type === 'electric' ? pp.battery.mass_kg : pp.fuel.load_kg;
+  const levels = plan.environment.windsAloft;
+  const aloft = levels ? windProfile(levels, 'environment.windsAloft') : null;
   return {
     S_m2: ac.wingArea_m2,
     polar,
@@ -96,44 +117,67 @@ export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): F
     consumableStart: start,
     usableEnergy_J: usable,
     takeoffMass_kg: ac.mass.empty_kg + ac.mass.payload_kg + carried,
+    aloft,
+    aloftReserves:
+      aloft !== null && plan.legs.some((l) => 'windSource' in l && l.windSource === 'aloft'),
     cache: null,
+    aloftCache: null,
     densityCache: null,
   };
 }
 
-/** The air at altitude h above mean sea level (cached for repeated altitudes). */
-export function ambientAt(model: FlightModel, h_m: number): Ambient {
-  const c = model.cache;
+/**
+ * The air at altitude h above mean sea level (cached for repeated altitudes): the plan's
+ * ISA+ΔT day, or with `aloft` the winds-aloft table's (wind and temperature; see the header).
+ */
+export function ambientAt(model: FlightModel, h_m: number, aloft = false): Ambient {
+  const table = aloft ? model.aloft : null;
+  const c = table ? model.aloftCache : model.cache;
   if (c !== null && c.h_m === h_m) return c;
   const Hp = h_m + model.pressureAltitudeOffset_m;
-  const atm = atmosphereAt(Hp, model.isaOffset_K, {
+  const dT = table ? aloftIsaOffset(table, Hp, model.isaOffset_K) : model.isaOffset_K;
+  const atm = atmosphereAt(Hp, dT, {
     altitude: 'pressureAltitude_m',
-    isaOffset: 'environment.isaOffset_K',
+    isaOffset: table ? 'environment.windsAloft.isaOffset_K' : 'environment.isaOffset_K',
   });
-  const amb = { h_m, pressureAltitude_m: Hp, atm, engineMax: engineMaximum(model.pp, atm, Hp) };
-  model.cache = amb;
+  const amb: Ambient = {
+    h_m,
+    pressureAltitude_m: Hp,
+    atm,
+    engineMax: engineMaximum(model.pp, atm, Hp),
+    aloft: table !== null,
+    windEast_m_s: 0,
+    windNorth_m_s: 0,
+  };
+  if (table) {
+    aloftWind(table, Hp, amb);
+    model.aloftCache = amb;
+  } else model.cache = amb;
   return amb;
 }
 
 /**
- * The altitude (above MSL) where the density is rho on the plan's day: exact density
- * altitude on a standard day, Newton on the pressure altitude otherwise (density falls
- * monotonically with height in every layer for any ISA offset the plan allows).
+ * The altitude (above MSL) where the density is rho on the plan's day (or in the winds-aloft
+ * table's air): exact density altitude on a standard day, Newton on the pressure altitude
+ * otherwise (density falls monotonically with height in every layer for any ISA offset the
+ * plan allows; with the table's offsets it is piecewise smooth, kinked at the levels).
  */
-export function altitudeForDensity(model: FlightModel, rho_kg_m3: number): number {
+export function altitudeForDensity(model: FlightModel, rho_kg_m3: number, aloft = false): number {
   const off = model.pressureAltitudeOffset_m;
-  const dT = model.isaOffset_K;
-  if (dT === 0) return densityAltitude(rho_kg_m3, 'cruiseClimb.density_kg_m3') - off;
+  const table = aloft ? model.aloft : null;
+  if (table === null && model.isaOffset_K === 0) {
+    return densityAltitude(rho_kg_m3, 'cruiseClimb.density_kg_m3') - off;
+  }
   // Along a cruise-climb the density changes little from one call to the next: start from
   // the last answer and reuse its slope (chord iterations, one atmosphere each).
-  const warm = warmDensityAltitude(model, rho_kg_m3);
+  const warm = warmDensityAltitude(model, rho_kg_m3, table);
   if (warm !== null) return warm - off;
   let Hp = densityAltitude(rho_kg_m3, 'cruiseClimb.density_kg_m3');
   let slope = NaN;
   for (let it = 0; it < 30; it++) {
     const d = 0.5;
-    const r0 = densityAt(Hp, dT);
-    slope = (densityAt(Hp + d, dT) - r0) / d;
+    const r0 = densityAt(model, table, Hp);
+    slope = (densityAt(model, table, Hp + d) - r0) / d;
     const step = (rho_kg_m3 - r0) / slope;
     if (!Number.isFinite(step)) {
       throw new InputError(
@@ -145,21 +189,26 @@ export function altitudeForDensity(model: FlightModel, rho_kg_m3: number): numbe
     Hp += step;
     if (Math.abs(step) < 1e-9) break;
   }
-  model.densityCache = { rho_kg_m3, Hp_m: Hp, slope };
+  model.densityCache = { rho_kg_m3, Hp_m: Hp, slope, aloft: table !== null };
   return Hp - off;
 }
 
 /** Chord iterations from the last answer; null when they do not settle (then start afresh). */
-function warmDensityAltitude(model: FlightModel, rho_kg_m3: number): number | null {
+function warmDensityAltitude(
+  model: FlightModel,
+  rho_kg_m3: number,
+  table: WindProfile | null,
+): number | null {
+  const aloft = table !== null;
   const c = model.densityCache;
-  if (c === null) return null;
+  if (c === null || c.aloft !== aloft) return null;
   let Hp = c.Hp_m + (rho_kg_m3 - c.rho_kg_m3) / c.slope;
   try {
     for (let it = 0; it < 8 && Number.isFinite(Hp); it++) {
-      const step = (rho_kg_m3 - densityAt(Hp, model.isaOffset_K)) / c.slope;
+      const step = (rho_kg_m3 - densityAt(model, table, Hp)) / c.slope;
       Hp += step;
       if (Math.abs(step) < 1e-9) {
-        model.densityCache = { rho_kg_m3, Hp_m: Hp, slope: c.slope };
+        model.densityCache = { rho_kg_m3, Hp_m: Hp, slope: c.slope, aloft };
         return Hp;
       }
     }
@@ -169,8 +218,9 @@ function warmDensityAltitude(model: FlightModel, rho_kg_m3: number): number | nu
   return null;
 }
 
-function densityAt(Hp: number, isaOffset_K: number): number {
-  return atmosphereAt(Hp, isaOffset_K).rho_kg_m3;
+function densityAt(model: FlightModel, table: WindProfile | null, Hp: number): number {
+  const dT = table ? aloftIsaOffset(table, Hp, model.isaOffset_K) : model.isaOffset_K;
+  return atmosphereAt(Hp, dT).rho_kg_m3;
 }
 
 /** TAS of a fixed airspeed (TAS, EAS, CAS or Mach) in this air. */

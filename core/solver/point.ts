@@ -9,6 +9,8 @@
  * Glide at idle: sink = V/(L/D). Cruise-climb: V and CL fixed, the density follows the weight,
  * ρ = 2W/(V²·S·CL) (Anderson, Aircraft Performance and Design, ch. 5).
  * Horizontal airspeed √(V² − ḣ²) enters the wind triangle.
+ * A path with `aloft` takes the air and, with `aloft.wind`, the wind at each altitude from
+ * the winds-aloft table (model.ts, aloft.ts); best range then uses the local wind.
  */
 import type { FixedSpeed } from '../plan/schema.ts';
 import { G0 } from '../units.ts';
@@ -30,6 +32,7 @@ import {
   type SpeedContext,
 } from './speeds.ts';
 import { alongTrackSpeed } from './wind.ts';
+import { crosswindOf, headwindOf } from './aloft.ts';
 
 export type SpeedSchedule =
   | { kind: 'fixed'; speed: FixedSpeed }
@@ -48,11 +51,21 @@ export type VerticalMode =
   | { kind: 'descent'; rate_m_s: number }
   | { kind: 'glide' };
 
+/** Weather from the winds-aloft table: its air always, its wind against the course when `wind`. */
+export interface AloftPath {
+  wind: boolean;
+  sinCourse: number;
+  cosCourse: number;
+}
+
 export interface FlightPath {
   speed: SpeedSchedule;
   vertical: VerticalMode;
+  /** The wind components held along the path (unless `aloft.wind`). */
   headwind_m_s: number;
   crosswind_m_s: number;
+  /** Air (and wind) from the winds-aloft table; absent: the plan's ISA offset and the fixed wind. */
+  aloft?: AloftPath;
   /** Plan path of the leg's speed, for messages (e.g. `legs.3.speed`). */
   field: string;
 }
@@ -73,6 +86,9 @@ export interface Point {
   horizontal_m_s: number;
   /** Ground speed along the course; ≤ 0 when the wind cannot be beaten. */
   groundSpeed_m_s: number;
+  /** Wind components against the course here (+ headwind, + from the right). */
+  headwind_m_s: number;
+  crosswind_m_s: number;
   CL: number;
   CD: number;
   drag_N: number;
@@ -101,6 +117,8 @@ export function newPoint(model: FlightModel, h_m: number): Point {
     tas_m_s: 0,
     horizontal_m_s: 0,
     groundSpeed_m_s: 0,
+    headwind_m_s: 0,
+    crosswind_m_s: 0,
     CL: 0,
     CD: 0,
     drag_N: 0,
@@ -138,6 +156,7 @@ function scheduleTas(
   memo: ScheduleMemo,
   out: Point,
 ): number {
+  // The wind of the point (out.headwind_m_s, out.crosswind_m_s) is set before this runs.
   const s = path.speed;
   out.speedLimitedBy = null;
   switch (s.kind) {
@@ -161,8 +180,8 @@ function scheduleTas(
     model,
     mass_kg,
     amb,
-    headwind_m_s: path.headwind_m_s,
-    crosswind_m_s: path.crosswind_m_s,
+    headwind_m_s: out.headwind_m_s,
+    crosswind_m_s: out.crosswind_m_s,
     guess_m_s: memo.guess_m_s,
     boundHint: memo.boundHint,
   };
@@ -197,12 +216,21 @@ export function evaluatePoint(
   const S = model.S_m2;
   const v = path.vertical;
   if (!(mass_kg > 0)) throw new FlightLimit(`the mass fell to ${mass_kg} kg`);
+  const aloft = path.aloft;
   let h = h_m;
   if (v.kind === 'cruiseClimb' && path.speed.kind === 'constantTas') {
     const V0 = path.speed.tas_m_s;
-    h = altitudeForDensity(model, (2 * W) / (V0 * V0 * S * v.CL));
+    h = altitudeForDensity(model, (2 * W) / (V0 * V0 * S * v.CL), aloft !== undefined);
   }
-  const amb = ambientAt(model, h);
+  const amb = ambientAt(model, h, aloft !== undefined);
+  if (aloft !== undefined && aloft.wind) {
+    const { windEast_m_s: e, windNorth_m_s: n } = amb;
+    out.headwind_m_s = headwindOf(e, n, aloft.sinCourse, aloft.cosCourse);
+    out.crosswind_m_s = crosswindOf(e, n, aloft.sinCourse, aloft.cosCourse);
+  } else {
+    out.headwind_m_s = path.headwind_m_s;
+    out.crosswind_m_s = path.crosswind_m_s;
+  }
   const V = scheduleTas(model, path, mass_kg, amb, memo, out);
   if (!(V > 0 && V < amb.atm.a_m_s)) {
     throw new FlightLimit(
@@ -246,7 +274,7 @@ export function evaluatePoint(
   out.amb = amb;
   out.tas_m_s = V;
   out.horizontal_m_s = horizontal;
-  out.groundSpeed_m_s = alongTrackSpeed(horizontal, path.headwind_m_s, path.crosswind_m_s);
+  out.groundSpeed_m_s = alongTrackSpeed(horizontal, out.headwind_m_s, out.crosswind_m_s);
   out.CL = CL;
   out.CD = CD;
   out.drag_N = D;

@@ -6,10 +6,16 @@
  * usable energy. Alternate and hold are each flown from the landing mass with the same
  * integrator as the legs (each starting at the landing mass is slightly conservative for
  * the hold, which in practice follows the alternate).
+ *
+ * When some leg takes its weather from the winds-aloft table, so do the reserves: both are
+ * flown in the table's air (its temperature at their altitude), and the alternate with the
+ * table's whole wind speed at its altitude as a headwind — the direction to the alternate is
+ * not part of the plan, and a headwind is the conservative assumption. The hold needs no
+ * wind: its consumption over a time does not depend on it.
  */
 import type { ReservePolicy } from '../plan/schema.ts';
-import type { FlightModel } from './model.ts';
-import { fmt, type SpeedSchedule } from './point.ts';
+import { ambientAt, type FlightModel } from './model.ts';
+import { fmt, type FlightPath, type SpeedSchedule } from './point.ts';
 import { flySegment, type Independent, type MissionState } from './segment.ts';
 import type { ReserveBreakdown } from './types.ts';
 
@@ -37,16 +43,18 @@ export function requiredReserves(
   ): number => {
     if (amount <= 0) return 0;
     const start: MissionState = { ...landing, t_s: 0, x_m: 0, air_m: 0, h_m };
+    let path: FlightPath;
+    try {
+      path = reservePath(model, what, speed, h_m);
+    } catch (e) {
+      computed = false;
+      warnings.push(`Reserve ${what}: could not be computed (${(e as Error).message}).`);
+      return 0;
+    }
     const seg = flySegment(
       model,
       {
-        path: {
-          speed,
-          vertical: { kind: 'level' },
-          headwind_m_s: 0,
-          crosswind_m_s: 0,
-          field: `reserves.${what}`,
-        },
+        path,
         indep,
         to: amount,
         limits: [],
@@ -91,4 +99,27 @@ export function requiredReserves(
     computed,
     warnings,
   };
+}
+
+/** Still air on the plan's day, or the table's air with its wind speed as a headwind. */
+function reservePath(
+  model: FlightModel,
+  what: string,
+  speed: SpeedSchedule,
+  h_m: number,
+): FlightPath {
+  const path: FlightPath = {
+    speed,
+    vertical: { kind: 'level' },
+    headwind_m_s: 0,
+    crosswind_m_s: 0,
+    field: `reserves.${what}`,
+  };
+  if (!model.aloftReserves) return path;
+  path.aloft = { wind: false, sinCourse: 0, cosCourse: 1 };
+  if (what === 'alternate') {
+    const amb = ambientAt(model, h_m, true);
+    path.headwind_m_s = Math.hypot(amb.windEast_m_s, amb.windNorth_m_s);
+  }
+  return path;
 }

@@ -88,7 +88,7 @@ export function limitMargin(
     case 'consumable':
       return left / (model.consumableStart > 1e-9 ? model.consumableStart : 1);
     case 'wind': {
-      const cross = Math.abs(spec.path.crosswind_m_s);
+      const cross = Math.abs(p.crosswind_m_s);
       return Math.min(p.groundSpeed_m_s, p.horizontal_m_s - cross) / p.tas_m_s + LIMIT_TOLERANCE;
     }
   }

@@ -2,22 +2,33 @@
  * The mission solver: flies the plan's legs in order from the departure elevation with the
  * take-off mass and the full consumable, then works out the reserve required on landing and
  * the feasibility checks (with the airfield's take-off, launch and landing checks when the
- * plan has an airfield, fieldChecks.ts). A leg that cannot be flown stops the mission there
+ * plan has an airfield, fieldChecks.ts). With a plan route, legs that name a waypoint take
+ * their course (and a cruise its distance) from the route (routeTrack.ts), and the legs that
+ * reach waypoints say so (routeProgress.ts turns that into per-waypoint estimates). Legs set
+ * to the winds-aloft table get its wind and temperature at every altitude (model.ts, point.ts).
+ * A leg that cannot be flown stops the mission there
  * (the result keeps everything up to that point; later legs are 'notReached'). Never throws
  * for a plan that passed PlanSchema; every number in the result is finite (guard.ts).
  */
 import { InputError } from '../errors.ts';
-import type { LoiterLeg, Plan } from '../plan/schema.ts';
+import type { Leg, LoiterLeg, Plan } from '../plan/schema.ts';
 import { consumableOf } from '../propulsion/index.ts';
 import { missionChecks, verdictOf } from './checks.ts';
 import { fieldChecks } from './fieldChecks.ts';
 import { guardResult } from './guard.ts';
-import { baseResult, legName, type LegContext } from './legs/common.ts';
+import { baseResult, legName, refusedLeg, type LegContext } from './legs/common.ts';
 import { flyLeg, type LegOutcome } from './legs/index.ts';
 import { searchLoiterConsumption } from './loiterReserve.ts';
 import { buildModel, RELATIVE_TOLERANCE, type FlightModel, type SolveTolerance } from './model.ts';
 import { fmt } from './point.ts';
 import { requiredReserves } from './reserves.ts';
+import {
+  alongAfter,
+  annotateLeg,
+  flyRouteCruise,
+  routeTrack,
+  type RouteTrack,
+} from './routeTrack.ts';
 import type { MissionState } from './segment.ts';
 import type { LegResult, PlanResult } from './types.ts';
 
@@ -65,8 +76,40 @@ interface Flown {
   warnings: string[];
 }
 
-function isUntilReserve(leg: Plan['legs'][number]): leg is LoiterLeg {
+/** What every flight of the legs shares: the model, the plan and the legs as flown. */
+interface Mission {
+  model: FlightModel;
+  plan: Plan;
+  /** plan.legs, with the route's course where a leg names a waypoint. */
+  legs: readonly Leg[];
+  route: RouteTrack | null;
+}
+
+function isUntilReserve(leg: Leg): leg is LoiterLeg {
   return leg.kind === 'loiter' && leg.end.by === 'reserve';
+}
+
+/** Flies one leg (route-aware): `along_m` of the way to the next waypoint already flown. */
+function flyOne(
+  m: Mission,
+  ctx: LegContext,
+  state: MissionState,
+  consume: number,
+  along_m: number,
+): LegOutcome {
+  const i = ctx.index;
+  const leg = m.legs[i]!;
+  const route = m.route;
+  if (route === null) return flyLeg(ctx, leg, state, consume);
+  if (route.failure !== null && route.failure.legIndex === i) {
+    return refusedLeg(ctx, leg, state, route.failure.message);
+  }
+  const routed = route.routed[i];
+  const o = routed?.stretch
+    ? flyRouteCruise(ctx, m.legs, routed, state, along_m)
+    : flyLeg(ctx, leg, state, consume);
+  if (routed !== undefined) annotateLeg(m.plan, routed, o);
+  return o;
 }
 
 /**
@@ -74,21 +117,22 @@ function isUntilReserve(leg: Plan['legs'][number]): leg is LoiterLeg {
  * flown for nothing: the loiter being searched for takes all the spare.
  */
 function flyLegs(
-  model: FlightModel,
-  plan: Plan,
+  m: Mission,
   from: number,
   state: MissionState,
   samples: number,
+  along_m: number,
 ): Flown {
   const outcomes: LegOutcome[] = [];
   const warnings: string[] = [];
   let s = state;
-  for (let i = from; i < plan.legs.length; i++) {
-    const leg = plan.legs[i]!;
-    const ctx: LegContext = { model, index: i, samples };
+  let along = along_m;
+  for (let i = from; i < m.legs.length; i++) {
+    const leg = m.legs[i]!;
+    const ctx: LegContext = { model: m.model, index: i, samples };
     let consume = 0;
     if (isUntilReserve(leg) && samples > 0) {
-      const found = searchUntilReserve(model, plan, i, s);
+      const found = searchUntilReserve(m, i, s, along);
       consume = found.consume;
       if (found.status === 'none') {
         warnings.push(
@@ -96,21 +140,23 @@ function flyLegs(
         );
       }
     }
-    const o = flyLeg(ctx, leg, s, consume);
+    const o = flyOne(m, ctx, s, consume, along);
     outcomes.push(o);
     warnings.push(...o.warnings);
+    if (m.route !== null) along = alongAfter(m.route, i, along, o.result.groundDistance_m);
     s = o.end;
     if (o.failed) return { outcomes, end: s, failedAt: i, warnings };
   }
   return { outcomes, end: s, failedAt: null, warnings };
 }
 
-function searchUntilReserve(model: FlightModel, plan: Plan, index: number, start: MissionState) {
-  const leg = plan.legs[index]!;
+function searchUntilReserve(m: Mission, index: number, start: MissionState, along_m: number) {
+  const { model, plan } = m;
   const surplus = (c: number): number | null => {
-    const loiter = flyLeg({ model, index, samples: 0 }, leg, start, c);
+    const loiter = flyOne(m, { model, index, samples: 0 }, start, c, along_m);
     if (loiter.failed) return null;
-    const rest = flyLegs(model, plan, index + 1, loiter.end, 0);
+    const along = m.route ? alongAfter(m.route, index, along_m, loiter.result.groundDistance_m) : 0;
+    const rest = flyLegs(m, index + 1, loiter.end, 0, along);
     if (rest.failedAt !== null) return null;
     const trip = model.consumableStart - rest.end.left;
     return rest.end.left - requiredReserves(model, plan.reserves, rest.end, trip).required.total;
@@ -127,6 +173,8 @@ function searchUntilReserve(model: FlightModel, plan: Plan, index: number, start
 
 function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): PlanResult {
   const model = buildModel(plan, tolerance);
+  const route = routeTrack(plan);
+  const mission: Mission = { model, plan, legs: route ? route.legs : plan.legs, route };
   const env = plan.environment;
   const start: MissionState = {
     t_s: 0,
@@ -136,7 +184,7 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
     mass_kg: model.takeoffMass_kg,
     left: model.consumableStart,
   };
-  const flown = flyLegs(model, plan, 0, start, samples);
+  const flown = flyLegs(mission, 0, start, samples, 0);
   const end = flown.end;
   const completed = flown.failedAt === null;
   const legs: LegResult[] = flown.outcomes.map((o) => o.result);
@@ -148,7 +196,7 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
   const trip = model.consumableStart - end.left;
   const reserve = requiredReserves(model, plan.reserves, end, trip);
   const total = reserve.required.total;
-  const warnings = [...flown.warnings, ...reserve.warnings];
+  const warnings = [...(route?.warnings ?? []), ...flown.warnings, ...reserve.warnings];
   if (completed && Math.abs(end.h_m - env.arrivalElevation_m) > 1) {
     warnings.push(
       `The mission ends at ${fmt(end.h_m)} m, not at the arrival elevation ${fmt(env.arrivalElevation_m)} m.`,

@@ -72,6 +72,14 @@ export interface LegResult {
   /** Accepted integrator steps. */
   steps: number;
   series: LegSeries;
+  /**
+   * With a plan route, for a leg that names a waypoint: the waypoint it flies to and the
+   * true course it takes from the route (the initial course of the geodesic).
+   */
+  toWaypoint?: string;
+  course_deg?: number;
+  /** The waypoint reached at the end of this leg (index in plan.route.waypoints). */
+  waypointReached?: { id: string; name: string; index: number };
 }
 
 export interface Check {

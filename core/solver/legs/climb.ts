@@ -7,8 +7,14 @@
 import type { ClimbLeg } from '../../plan/schema.ts';
 import { fmt, type SpeedSchedule } from '../point.ts';
 import type { LimitKind, MissionState, SegmentSpec } from '../segment.ts';
-import { windComponents } from '../wind.ts';
-import { flyFlightLeg, pathFor, refusedLeg, type LegContext, type LegOutcome } from './common.ts';
+import {
+  flyFlightLeg,
+  legWind,
+  pathFor,
+  refusedLeg,
+  type LegContext,
+  type LegOutcome,
+} from './common.ts';
 
 export function flyClimb(ctx: LegContext, leg: ClimbLeg, start: MissionState): LegOutcome {
   if (leg.toAltitude_m < start.h_m) {
@@ -19,7 +25,8 @@ export function flyClimb(ctx: LegContext, leg: ClimbLeg, start: MissionState): L
       `climbs to ${fmt(leg.toAltitude_m)} m, below the current altitude ${fmt(start.h_m)} m (use a descent leg)`,
     );
   }
-  const wind = { ...windComponents(leg.course_deg, leg.wind), course_deg: leg.course_deg };
+  const wind = legWind(ctx.model, ctx.index, leg);
+  if (typeof wind === 'string') return refusedLeg(ctx, leg, start, wind);
   const speed: SpeedSchedule =
     leg.speed.kind === 'bestRate' ? { kind: 'bestClimb' } : { kind: 'fixed', speed: leg.speed };
   const path = pathFor(

@@ -4,7 +4,7 @@
  */
 import type { Leg } from '../../plan/schema.ts';
 import type { FlightModel } from '../model.ts';
-import { fmt, type FlightPath } from '../point.ts';
+import { fmt, type AloftPath, type FlightPath } from '../point.ts';
 import {
   climbFloor,
   flySegment,
@@ -16,6 +16,9 @@ import {
 } from '../segment.ts';
 import type { FlightState, LegResult, LegSeries } from '../types.ts';
 import { normalizeDegrees, type WindComponents } from '../wind.ts';
+import { reportedWind, type LegWind } from './weather.ts';
+
+export { legWind, type LegWind } from './weather.ts';
 
 export interface LegContext {
   model: FlightModel;
@@ -134,7 +137,7 @@ export function stopMessage(
     case 'consumable':
       return `${name}: ${consumableWord(ctx.model)} exhausted ${progress(spec.indep, spec.to, start, seg.end)}`;
     case 'wind':
-      return `${name}: the wind (${fmt(Math.hypot(spec.path.headwind_m_s, spec.path.crosswind_m_s))} m/s) leaves no ground speed along the course at ${fmt(p.tas_m_s)} m/s true airspeed`;
+      return `${name}: the wind (${fmt(Math.hypot(p.headwind_m_s, p.crosswind_m_s))} m/s) leaves no ground speed along the course at ${fmt(p.tas_m_s)} m/s true airspeed`;
     default:
       return `${name}: ${seg.message}`;
   }
@@ -152,7 +155,7 @@ export function flyFlightLeg(
   leg: Leg,
   start: MissionState,
   spec: SegmentSpec,
-  wind: WindComponents & { course_deg: number },
+  wind: LegWind,
   checks: { stall: boolean; power: boolean; climb: boolean },
 ): LegOutcome {
   const seg = flySegment(ctx.model, spec, start);
@@ -165,10 +168,11 @@ export function flyFlightLeg(
   r.minStallRatio = finiteOr(s.minStallRatio, 0);
   r.powerRequired_W = finiteOr(s.maxPowerRequired_W, 0);
   r.powerAvailable_W = finiteOr(s.powerAvailableAtMax_W, 0);
-  r.headwind_m_s = wind.headwind_m_s;
-  r.crosswind_m_s = wind.crosswind_m_s;
+  const shown = reportedWind(ctx.model, wind, start.h_m, seg.end.h_m);
+  r.headwind_m_s = shown.headwind_m_s;
+  r.crosswind_m_s = shown.crosswind_m_s;
   const tas = r.meanTas_m_s > 0 ? r.meanTas_m_s : s.startTas_m_s;
-  const ratio = tas > 0 ? wind.crosswind_m_s / tas : 0;
+  const ratio = tas > 0 ? shown.crosswind_m_s / tas : 0;
   const wca = Math.abs(ratio) < 1 ? (Math.asin(ratio) * 180) / Math.PI : 0;
   r.heading_deg = normalizeDegrees(wind.course_deg + wca);
   r.steps = seg.steps;
@@ -209,20 +213,22 @@ export function flyFlightLeg(
   };
 }
 
-/** A path for a leg with a course and wind. */
+/** A path for a leg with a course and wind (the table's air and wind with `wind.aloft`). */
 export function pathFor(
   field: string,
   speed: FlightPath['speed'],
   vertical: FlightPath['vertical'],
-  wind: WindComponents,
+  wind: WindComponents & { aloft?: AloftPath },
 ): FlightPath {
-  return {
+  const path: FlightPath = {
     speed,
     vertical,
     headwind_m_s: wind.headwind_m_s,
     crosswind_m_s: wind.crosswind_m_s,
     field,
   };
+  if (wind.aloft !== undefined) path.aloft = wind.aloft;
+  return path;
 }
 
 /** The outcome of a leg refused before it starts (e.g. a climb to a lower altitude). */

@@ -9,11 +9,11 @@ import { G0 } from '../../units.ts';
 import { ambientAt } from '../model.ts';
 import { evaluatePoint, newPoint, type SpeedSchedule } from '../point.ts';
 import type { LimitKind, MissionState, SegmentSpec } from '../segment.ts';
-import { windComponents } from '../wind.ts';
 import {
   consumableWord,
   flyFlightLeg,
   legName,
+  legWind,
   pathFor,
   refusedLeg,
   type LegContext,
@@ -23,7 +23,8 @@ import { fmt } from '../point.ts';
 
 export function flyCruise(ctx: LegContext, leg: CruiseLeg, start: MissionState): LegOutcome {
   const model = ctx.model;
-  const wind = { ...windComponents(leg.course_deg, leg.wind), course_deg: leg.course_deg };
+  const wind = legWind(ctx.model, ctx.index, leg);
+  if (typeof wind === 'string') return refusedLeg(ctx, leg, start, wind);
   const field = `legs.${ctx.index}.speed`;
   const end = leg.end;
   if (end.by === 'fuel' && model.consumable !== 'fuel') {
@@ -60,7 +61,7 @@ export function flyCruise(ctx: LegContext, leg: CruiseLeg, start: MissionState):
     } catch (e) {
       return refusedLeg(ctx, leg, start, e instanceof Error ? e.message : String(e));
     }
-    const rho = ambientAt(model, start.h_m).atm.rho_kg_m3;
+    const rho = ambientAt(model, start.h_m, path.aloft !== undefined).atm.rho_kg_m3;
     const CL = (2 * start.mass_kg * G0) / (rho * V0 * V0 * model.S_m2);
     speed = { kind: 'constantTas', tas_m_s: V0 };
     path = pathFor(field, speed, { kind: 'cruiseClimb', CL }, wind);

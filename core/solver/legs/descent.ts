@@ -6,8 +6,14 @@
 import type { DescentLeg } from '../../plan/schema.ts';
 import { fmt, type FlightPath } from '../point.ts';
 import type { LimitKind, MissionState, SegmentSpec } from '../segment.ts';
-import { windComponents } from '../wind.ts';
-import { flyFlightLeg, pathFor, refusedLeg, type LegContext, type LegOutcome } from './common.ts';
+import {
+  flyFlightLeg,
+  legWind,
+  pathFor,
+  refusedLeg,
+  type LegContext,
+  type LegOutcome,
+} from './common.ts';
 
 export function flyDescent(ctx: LegContext, leg: DescentLeg, start: MissionState): LegOutcome {
   if (leg.toAltitude_m > start.h_m) {
@@ -18,7 +24,8 @@ export function flyDescent(ctx: LegContext, leg: DescentLeg, start: MissionState
       `descends to ${fmt(leg.toAltitude_m)} m, above the current altitude ${fmt(start.h_m)} m (use a climb leg)`,
     );
   }
-  const wind = { ...windComponents(leg.course_deg, leg.wind), course_deg: leg.course_deg };
+  const wind = legWind(ctx.model, ctx.index, leg);
+  if (typeof wind === 'string') return refusedLeg(ctx, leg, start, wind);
   const field = `legs.${ctx.index}.mode`;
   const byRate = leg.mode.by === 'rate';
   const path: FlightPath =

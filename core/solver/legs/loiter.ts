@@ -6,8 +6,14 @@
 import type { LoiterLeg } from '../../plan/schema.ts';
 import type { SpeedSchedule } from '../point.ts';
 import type { LimitKind, MissionState, SegmentSpec } from '../segment.ts';
-import { windComponents } from '../wind.ts';
-import { flyFlightLeg, pathFor, type LegContext, type LegOutcome } from './common.ts';
+import {
+  flyFlightLeg,
+  legWind,
+  pathFor,
+  refusedLeg,
+  type LegContext,
+  type LegOutcome,
+} from './common.ts';
 
 /** `consume`: for an "until reserve" loiter, the amount of fuel kg or battery J to use. */
 export function flyLoiter(
@@ -16,7 +22,8 @@ export function flyLoiter(
   start: MissionState,
   consume = 0,
 ): LegOutcome {
-  const wind = { ...windComponents(leg.course_deg, leg.wind), course_deg: leg.course_deg };
+  const wind = legWind(ctx.model, ctx.index, leg);
+  if (typeof wind === 'string') return refusedLeg(ctx, leg, start, wind);
   const speed: SpeedSchedule =
     leg.speed.kind === 'bestEndurance'
       ? { kind: 'bestEndurance' }

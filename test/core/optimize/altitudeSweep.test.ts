@@ -2,7 +2,17 @@ import { describe, expect, it } from 'vitest';
 import { InputError } from '../../../core/errors.ts';
 import { bestCruiseAltitude } from '../../../core/optimize/altitudeSweep.ts';
 import { solvePlan } from '../../../core/solver/solve.ts';
+import type { Plan } from '../../../core/plan/schema.ts';
+import type { WindLevel } from '../../../core/weather/windsAloft.ts';
 import { mission, propCruiseByFuel } from './fixtures.ts';
+
+/** The jet mission with every climb, cruise and descent leg in the winds-aloft table. */
+function jetInTable(levels: WindLevel[]): Plan {
+  const plan = mission('jet', 1_500_000);
+  plan.environment.windsAloft = levels;
+  for (const leg of plan.legs) if ('windSource' in leg || 'wind' in leg) leg.windSource = 'aloft';
+  return plan;
+}
 
 describe('bestCruiseAltitude', () => {
   it('a jet prefers a higher cruise altitude than a piston propeller aircraft', () => {
@@ -26,6 +36,37 @@ describe('bestCruiseAltitude', () => {
     (plan.legs[1] as { toAltitude_m: number }).toAltitude_m = r.best!.altitude_m;
     const solved = solvePlan(plan).landing.remaining;
     expect(Math.abs(solved - r.best!.remaining) / solved).toBeLessThan(1e-9);
+  });
+
+  it('with a strong headwind high up and light wind low, picks a lower altitude than in calm air', () => {
+    // The legs fly east (course 090); a wind from 090 is a pure headwind (meteorological
+    // convention). A jet-stream-like profile (common practice: winds aloft strengthen toward
+    // the tropopause): 5–10 m/s up to 8 km, 90 m/s at 10 km, 120 m/s at 13 km.
+    const calm = bestCruiseAltitude(
+      jetInTable([
+        { altitude_m: 0, from_deg: 90, speed_m_s: 0 },
+        { altitude_m: 13000, from_deg: 90, speed_m_s: 0 },
+      ]),
+      { points: 13 },
+    );
+    const windy = bestCruiseAltitude(
+      jetInTable([
+        { altitude_m: 0, from_deg: 90, speed_m_s: 5 },
+        { altitude_m: 8000, from_deg: 90, speed_m_s: 10 },
+        { altitude_m: 10000, from_deg: 90, speed_m_s: 90 },
+        { altitude_m: 13000, from_deg: 90, speed_m_s: 120 },
+      ]),
+      { points: 13 },
+    );
+    expect(calm.best).not.toBeNull();
+    expect(windy.best).not.toBeNull();
+    // In calm air the jet's best altitude is near the top (common practice, first test).
+    expect(calm.best!.altitude_m).toBeGreaterThan(11_000);
+    expect(windy.best!.altitude_m).toBeLessThan(calm.best!.altitude_m - 2000);
+    // Below the jet stream the table is light: the lower level really leaves more fuel.
+    expect(windy.best!.remaining).toBeGreaterThan(
+      windy.curve.remaining[windy.curve.remaining.length - 1]!,
+    );
   });
 
   it('marks the altitudes where the mission fails as infeasible, with finite numbers', () => {

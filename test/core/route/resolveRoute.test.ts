@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { WGS84_A_M } from '../../../core/route/geodesic.ts';
-import { resolveLegTargets } from '../../../core/route/resolveRoute.ts';
+import { resolveLegRoute, resolveLegTargets } from '../../../core/route/resolveRoute.ts';
 import type { Waypoint } from '../../../core/route/waypoints.ts';
 
 const DEG = Math.PI / 180;
@@ -32,13 +32,34 @@ describe('resolveLegTargets', () => {
     expect(r[4]!.course_deg).toBeLessThan(270);
   });
 
-  it('names the leg for an unknown or repeated target (InputError)', () => {
+  it('groups consecutive legs naming the same waypoint into one run on one geodesic', () => {
+    const r = resolveLegRoute({ waypoints }, [
+      { toWaypoint: 'east' }, // climb toward east
+      {}, // an untargeted leg does not break the run
+      { toWaypoint: 'east' }, // cruise to east
+      { toWaypoint: 'north' },
+      { toWaypoint: 'north' },
+    ]);
+    expect(r.error).toBeNull();
+    expect(r.targets[0]).toBe(r.targets[2]);
+    expect(r.targets[0]).toMatchObject({ run: 0, waypointIndex: 1, leg: { from: { id: 'home' } } });
+    expect(r.targets[3]).toBe(r.targets[4]);
+    expect(r.targets[3]).toMatchObject({ run: 1, waypointIndex: 2, leg: { from: { id: 'east' } } });
+    const legs = resolveLegTargets({ waypoints }, [{ toWaypoint: 'east' }, { toWaypoint: 'east' }]);
+    expect(legs[1]).toBe(legs[0]);
+  });
+
+  it('names the leg for an unknown target or a first target where the aircraft starts', () => {
     expect(() => resolveLegTargets({ waypoints }, [{ toWaypoint: 'nowhere' }])).toThrow(
       /legs\.0\.toWaypoint: "nowhere" .*a waypoint of the route/,
     );
     expect(() =>
-      resolveLegTargets({ waypoints }, [{ toWaypoint: 'east' }, { toWaypoint: 'east' }]),
-    ).toThrow(/legs\.1\.toWaypoint: "east" .*already at \(east\)/);
+      resolveLegTargets({ waypoints }, [{}, { toWaypoint: 'home' }, { toWaypoint: 'east' }]),
+    ).toThrow(/legs\.1\.toWaypoint: "home" .*already at \(home\)/);
+    const partial = resolveLegRoute({ waypoints }, [{ toWaypoint: 'east' }, { toWaypoint: 'x' }]);
+    expect(partial.targets).toHaveLength(1); // resolved up to the bad leg
+    expect(partial.error?.legIndex).toBe(1);
+    expect(partial.error?.error.field).toBe('legs.1.toWaypoint');
     expect(() =>
       resolveLegTargets({ waypoints: [] }, [{ toWaypoint: 'east' }], 'plan.legs'),
     ).toThrow(/plan\.legs\.0\.toWaypoint/);

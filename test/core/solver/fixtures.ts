@@ -209,6 +209,7 @@ export interface PlanOptions {
   settings?: Partial<Plan['settings']>;
   environment?: Partial<Plan['environment']>;
   aircraft?: (a: Plan['aircraft']) => Plan['aircraft'];
+  route?: Plan['route'];
 }
 
 /** A valid plan (checked by PlanSchema.parse) for the aircraft of `kind` flying `legs`. */
@@ -239,6 +240,7 @@ export function makePlan(kind: Kind, legs: Leg[], o: PlanOptions = {}): Plan {
     },
     settings: { stallFactor: 1.2, tightMargin: 0.1, minClimbRate_m_s: 0.5, ...o.settings },
     legs,
+    ...(o.route ? { route: o.route } : {}),
   });
 }
 

@@ -258,6 +258,72 @@ describe('solvePlan over random valid plans', () => {
     );
   });
 
+  it('the same with a route and a winds-aloft table on random legs', () => {
+    const level = fc.record({
+      altitude_m: fc.double({ min: -1000, max: 12_000, noNaN: true }),
+      from_deg: fc.double({ min: 0, max: 360, noNaN: true }),
+      speed_m_s: fc.double({ min: 0, max: 60, noNaN: true }),
+      isaOffset_K: fc.option(fc.double({ min: -30, max: 30, noNaN: true }), { nil: undefined }),
+    });
+    const point = fc.record({
+      lat_deg: fc.double({ min: -80, max: 80, noNaN: true }),
+      lon_deg: fc.double({ min: -180, max: 180, noNaN: true }),
+    });
+    const extras = fc.record({
+      levels: fc.uniqueArray(level, { minLength: 1, maxLength: 5, selector: (l) => l.altitude_m }),
+      start: point,
+      // Waypoints a few to a few hundred kilometres apart, some possibly coincident.
+      steps: fc.array(
+        fc.record({
+          dLat: fc.double({ min: -2, max: 2, noNaN: true }),
+          dLon: fc.double({ min: -2, max: 2, noNaN: true }),
+        }),
+        { minLength: 1, maxLength: 4 },
+      ),
+      targets: fc.array(fc.constantFrom('w0', 'w1', 'w2', 'w3', 'w4', 'nowhere', undefined), {
+        minLength: 7,
+        maxLength: 7,
+      }),
+      aloft: fc.array(fc.boolean(), { minLength: 7, maxLength: 7 }),
+    });
+    fc.assert(
+      fc.property(planArb, extras, (base, x) => {
+        const waypoints = [x.start, ...x.steps].map((p, i, all) => {
+          const lat = all
+            .slice(0, i + 1)
+            .reduce((a, q) => a + ('dLat' in q ? q.dLat : q.lat_deg), 0);
+          const lon = all
+            .slice(0, i + 1)
+            .reduce((a, q) => a + ('dLon' in q ? q.dLon : q.lon_deg), 0);
+          return {
+            id: `w${i}`,
+            name: '',
+            lat_deg: Math.max(-89, Math.min(89, lat)),
+            lon_deg: ((((lon + 180) % 360) + 360) % 360) - 180,
+          };
+        });
+        const legs = base.legs.map((l, i) => {
+          if (!('course_deg' in l)) return l;
+          const t = x.targets[i];
+          return {
+            ...l,
+            ...(t === undefined ? {} : { toWaypoint: t }),
+            ...(x.aloft[i] ? { windSource: 'aloft' as const } : {}),
+          };
+        });
+        const parsed = PlanSchema.safeParse({
+          ...base,
+          legs,
+          environment: { ...base.environment, windsAloft: x.levels },
+          route: { waypoints, magneticVariation_deg: 0 },
+        });
+        if (!parsed.success) return; // e.g. two waypoints at one place: refused by the schema
+        assertSound(parsed.data, solvePlan(parsed.data, { samplesPerLeg: 4 }));
+      }),
+      { numRuns: 150 },
+    );
+  });
+
   it('more fuel never shortens a cruise flown until the fuel runs out', () => {
     fc.assert(
       fc.property(
