@@ -7,6 +7,8 @@ import './styles/fields.css';
 import './styles/legs.css';
 import './styles/outcome.css';
 import './styles/charts.css';
+import './styles/editors.css';
+import './styles/views.css';
 import './styles/print.css';
 
 createApp(App).mount('#app');

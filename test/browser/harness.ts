@@ -1,3 +1,5 @@
+// unlabelledControls runs in the page: it needs the DOM types.
+/// <reference lib="dom" />
 /**
  * Builds the planner page with Vite, serves the build on 127.0.0.1 at a free port and opens
  * it in headless Chromium (playwright-core, system Chromium, no GPU). Shared by the browser
@@ -54,11 +56,15 @@ export async function servePage(outDir: string): Promise<PreviewServer> {
   });
 }
 
+/**
+ * Builds, serves and opens the page. Test files that run side by side pass their own
+ * `outDir`, so that one build never empties the folder another one serves.
+ */
 export async function openPlanner(
-  options: { width?: number; height?: number } = {},
+  options: { width?: number; height?: number; outDir?: string } = {},
 ): Promise<PlannerPage> {
   if (!haveChromium) throw new Error(`Chromium not found at ${CHROMIUM_PATH}`);
-  const outDir = await buildPage();
+  const outDir = await buildPage(options.outDir);
   const server = await servePage(outDir);
   const url = server.resolvedUrls?.local[0];
   if (!url) throw new Error('vite preview did not report a local URL');
@@ -84,4 +90,21 @@ export async function openPlanner(
       );
     },
   };
+}
+
+/** Inputs, selects, text areas and buttons with no label a screen reader could read (outerHTML). */
+export async function unlabelledControls(page: Page): Promise<string[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll('input, select, textarea, button')]
+      .filter((el) => {
+        const e = el as HTMLInputElement;
+        if (e.type === 'hidden') return false;
+        const byFor = e.id && document.querySelector(`label[for="${CSS.escape(e.id)}"]`);
+        const wrapped = e.closest('label');
+        const aria = e.getAttribute('aria-label') || e.getAttribute('aria-labelledby');
+        const text = el.tagName === 'BUTTON' && (el.textContent ?? '').trim() !== '';
+        return !(byFor || wrapped || aria || text);
+      })
+      .map((el) => el.outerHTML.slice(0, 80)),
+  );
 }

@@ -18,7 +18,7 @@ import { bestSpeedForLeg } from '../../core/optimize/speedSweep.ts';
 import type { UnitSystemId } from '../../core/units.ts';
 import { SAMPLES_PER_LEG } from '../../renderer/src/composables/useResult.ts';
 import { examplePlan } from '../renderer/fixtures.ts';
-import { haveChromium, openPlanner, type PlannerPage } from './harness.ts';
+import { haveChromium, openPlanner, unlabelledControls, type PlannerPage } from './harness.ts';
 
 const SHOTS = new URL('../../artifacts/screenshots/', import.meta.url);
 
@@ -115,19 +115,7 @@ describe.runIf(haveChromium || !!process.env.CI)('planner page in headless Chrom
     await expect(page.locator(byTestId('caution')).innerText()).resolves.toContain(
       'Planning estimates only',
     );
-    const unlabelled = await page.evaluate(() =>
-      [...document.querySelectorAll('input, select, textarea, button')]
-        .filter((el) => {
-          const e = el as HTMLInputElement;
-          if (e.type === 'hidden') return false;
-          const byFor = e.id && document.querySelector(`label[for="${CSS.escape(e.id)}"]`);
-          const wrapped = e.closest('label');
-          const aria = e.getAttribute('aria-label') || e.getAttribute('aria-labelledby');
-          const text = el.tagName === 'BUTTON' && (el.textContent ?? '').trim() !== '';
-          return !(byFor || wrapped || aria || text);
-        })
-        .map((el) => el.outerHTML.slice(0, 80)),
-    );
+    const unlabelled = await unlabelledControls(page);
     expect(unlabelled).toEqual([]);
   });
 

@@ -13,6 +13,7 @@ import type { ResultStore } from './useResult.ts';
 import type { Units } from './useUnits.ts';
 import { buildLegCsv, fileStem } from '../support/csv.ts';
 import { readSetting, writeSetting } from '../support/settingsStore.ts';
+import { download } from '../support/download.ts';
 
 export interface FileActions {
   /** One line on what the last action did (shown in the status area). */
@@ -40,18 +41,6 @@ const AUTOSAVE_KEY = 'autosave';
 export const PREPARE_PRINT_EVENT = 'legwise:prepare-print';
 export const PRINT_DONE_EVENT = 'legwise:print-done';
 const AUTOSAVE_DELAY_MS = 2000;
-
-function download(text: string, fileName: string, type: string): void {
-  const url = URL.createObjectURL(new Blob([text], { type }));
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = fileName;
-  a.rel = 'noopener';
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}
 
 function pickFileText(): Promise<{ name: string; text: string } | null> {
   return new Promise((resolve) => {

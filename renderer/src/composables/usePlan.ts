@@ -20,10 +20,20 @@ import { defaultLeg } from '../../../core/plan/defaults.ts';
 import { useHistory, type History } from './useHistory.ts';
 import { aircraftSections, missionSections } from '../support/aircraftFields.ts';
 import { adaptLegs, legFields } from '../support/legFields.ts';
-import { parentPath, type ChoiceFieldDef, type FieldDef } from '../support/fieldTypes.ts';
+import {
+  num,
+  parentPath,
+  type ChoiceFieldDef,
+  type FieldDef,
+  type OptionalBlock,
+} from '../support/fieldTypes.ts';
 import { assignIssues, type FieldIssues } from '../support/issues.ts';
 import { getAtPath, setAtPath } from '../support/paths.ts';
 import * as legOps from '../support/legOps.ts';
+import { airfieldSections, fieldDataSection } from '../support/airfieldFields.ts';
+import { windLevelFields, waypointFields } from '../support/tableFields.ts';
+import { uncertaintyFields } from '../support/confidenceFields.ts';
+import { routeDistanceLegs } from '../support/routeOps.ts';
 
 export interface PlanStore {
   readonly history: History<Plan>;
@@ -41,7 +51,8 @@ export interface PlanStore {
   readonly selectedLegIndex: ComputedRef<number>;
   /** Changed since it was opened, created or saved. */
   readonly dirty: ComputedRef<boolean>;
-  setValue(path: string, value: unknown, group?: string): void;
+  /** Writes one value; inside an absent optional `block`, the block is created first. */
+  setValue(path: string, value: unknown, group?: string, block?: OptionalBlock): void;
   setChoice(def: ChoiceFieldDef, value: string): void;
   addLeg(kind: LegKind, at?: number): void;
   duplicateLeg(index: number): void;
@@ -63,13 +74,28 @@ export interface PlanStore {
 
 /** All field paths on screen for a plan: aircraft sheet, conditions and every leg. */
 export function allFields(plan: Plan): FieldDef[] {
-  const sections = [...aircraftSections(plan), ...missionSections(plan)];
+  const sections = [
+    ...aircraftSections(plan),
+    fieldDataSection(plan),
+    ...missionSections(plan),
+    ...airfieldSections(plan),
+  ];
+  const waypoints = plan.route?.waypoints ?? [];
+  const fromRoute = routeDistanceLegs(plan);
   return [
     { type: 'text', path: 'name', label: 'Plan name', maxLength: 120 },
     ...sections.flatMap((s) => s.fields),
     ...plan.legs.flatMap((leg, i) =>
-      legFields(leg, i, plan.aircraft.powerplant.type === 'electric'),
+      legFields(leg, i, plan.aircraft.powerplant.type === 'electric', waypoints, fromRoute.has(i)),
     ),
+    ...(plan.route
+      ? [
+          num('route.magneticVariation_deg', 'Magnetic variation', 'angle', 'deg'),
+          ...waypoints.flatMap((_, i) => waypointFields(i)),
+        ]
+      : []),
+    ...(plan.environment.windsAloft ?? []).flatMap((_, i) => windLevelFields(i)),
+    ...uncertaintyFields(plan),
   ];
 }
 
@@ -108,18 +134,24 @@ export function createPlanStore(initial: Plan, options: { historyLimit?: number 
   const commitLegs = (legs: Leg[], group?: string) =>
     history.commit({ ...draft.value, legs }, group);
 
-  function setValue(path: string, value: unknown, group?: string): void {
+  function setValue(path: string, value: unknown, group?: string, block?: OptionalBlock): void {
     if (getAtPath(draft.value, path) === value) return;
-    history.commit(setAtPath(draft.value, path, value), group);
+    const base =
+      block && getAtPath(draft.value, block.path) === undefined
+        ? setAtPath(draft.value, block.path, block.create(draft.value))
+        : draft.value;
+    history.commit(setAtPath(base, path, value), group);
   }
 
   function setChoice(def: ChoiceFieldDef, value: string): void {
-    if (getAtPath(draft.value, def.path) === value) return;
+    if (String(getAtPath(draft.value, def.path) ?? def.fallback ?? '') === value) return;
     history.seal();
     const parent = parentPath(def.path);
-    let next = def.variant
-      ? setAtPath(draft.value, parent, def.variant(value, getAtPath(draft.value, parent)))
-      : setAtPath(draft.value, def.path, value);
+    let next = def.apply
+      ? def.apply(draft.value, value)
+      : def.variant
+        ? setAtPath(draft.value, parent, def.variant(value, getAtPath(draft.value, parent)))
+        : setAtPath(draft.value, def.path, value);
     if (def.path === 'aircraft.powerplant.type') {
       next = { ...next, legs: adaptLegs(next.legs, value === 'electric') };
     }

@@ -1,6 +1,6 @@
 /**
  * Wires the shared state of the planner screen: the plan with its history, the unit
- * system, the live result and the optimizers run on demand. Created once by App.vue and provided to every component.
+ * system, the live result, the optimizers and the reserve Monte Carlo run on demand. Created once by App.vue and provided to every component.
  */
 import { provide } from 'vue';
 import type { Plan } from '../../../core/plan/schema.ts';
@@ -9,12 +9,14 @@ import { createPlanStore, PLAN_KEY, type PlanStore } from './usePlan.ts';
 import { createResultStore, RESULT_KEY, type ResultStore } from './useResult.ts';
 import { createUnits, UNITS_KEY, type Units } from './useUnits.ts';
 import { createTune, TUNE_KEY, type Tune } from './useTune.ts';
+import { CONFIDENCE_KEY, createConfidence, type Confidence } from './useConfidence.ts';
 
 export interface Planner {
   plan: PlanStore;
   result: ResultStore;
   units: Units;
   tune: Tune;
+  confidence: Confidence;
 }
 
 export function createPlanner(initial: Plan, system: UnitSystemId = 'si'): Planner {
@@ -24,6 +26,7 @@ export function createPlanner(initial: Plan, system: UnitSystemId = 'si'): Plann
     result: createResultStore(plan.lastValid, plan.valid),
     units: createUnits(system),
     tune: createTune(plan),
+    confidence: createConfidence(plan),
   };
 }
 
@@ -33,4 +36,5 @@ export function providePlanner(planner: Planner): void {
   provide(RESULT_KEY, planner.result);
   provide(UNITS_KEY, planner.units);
   provide(TUNE_KEY, planner.tune);
+  provide(CONFIDENCE_KEY, planner.confidence);
 }

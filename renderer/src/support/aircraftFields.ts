@@ -86,7 +86,7 @@ function powerplantFields(pp: Powerplant): FieldDef[] {
     `${p}.type`,
     'Powerplant kind',
     [
-      { value: 'propeller', label: 'Piston or turboprop with propeller' },
+      { value: 'propeller', label: 'Propeller (piston or turboprop)' },
       { value: 'jet', label: 'Jet' },
       { value: 'electric', label: 'Battery-electric' },
     ],

@@ -48,13 +48,45 @@ function colorOf(role: SeriesRole, colors: ChartColors, markIndex: number): stri
       ? colors.mark
       : (MARK_COLORS[markIndex % MARK_COLORS.length] ?? colors.mark);
   return colors[
-    role === 'line' ? 'line' : role === 'line2' ? 'line2' : role === 'points' ? 'points' : 'fail'
+    role === 'line'
+      ? 'line'
+      : role === 'line2' || role === 'bandLow' || role === 'bandHigh'
+        ? 'line2'
+        : role === 'points'
+          ? 'points'
+          : 'fail'
   ];
+}
+
+/** A translucent fill of a #rrggbb colour. */
+function translucent(color: string, alpha: number): string {
+  const m = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(color);
+  if (!m) return color;
+  const [r, g, b] = [m[1], m[2], m[3]].map((h) => parseInt(h ?? '0', 16));
+  return `rgba(${r}, ${g}, ${b}, ${alpha})`;
 }
 
 function dataset(s: Series, colors: ChartColors, markIndex: number) {
   const color = colorOf(s.role, colors, markIndex);
   const isPoints = s.role === 'points';
+  if (s.role === 'bandLow' || s.role === 'bandHigh') {
+    // The band: thin dashed edges, the upper one filled down to the lower (the series before it).
+    return {
+      label: s.label,
+      data: s.points as ScatterDataPoint[],
+      yAxisID: s.axis,
+      showLine: true,
+      borderColor: color,
+      backgroundColor: translucent(color, colors === CONTRAST_COLORS ? 0.28 : 0.18),
+      borderWidth: 1,
+      borderDash: [3, 3],
+      pointRadius: 0,
+      pointHoverRadius: 3,
+      tension: 0,
+      fill: s.role === 'bandHigh' ? '-1' : false,
+      order: 2,
+    };
+  }
   return {
     label: s.label,
     data: s.points as ScatterDataPoint[],
@@ -65,6 +97,7 @@ function dataset(s: Series, colors: ChartColors, markIndex: number) {
     borderWidth: s.role === 'fail' ? colors.width + 2 : s.role === 'mark' ? 1.5 : colors.width,
     borderDash:
       s.role === 'mark' ? [6, 4] : s.role === 'line2' && colors === CONTRAST_COLORS ? [8, 3] : [],
+    fill: false,
     // One radius per dataset, never per point: chart.js then shares the resolved options
     // among all points, which keeps an update cheap.
     pointRadius: isPoints ? 4 : 0,
@@ -129,7 +162,16 @@ export function chartOptions(
       },
     },
     plugins: {
-      legend: { position: 'top', labels: { color: colors.text, boxWidth: 14, font: { size: 12 } } },
+      legend: {
+        position: 'top',
+        labels: {
+          color: colors.text,
+          boxWidth: 14,
+          font: { size: 12 },
+          // A band's lower edge has no entry of its own: the upper edge names the band.
+          filter: (item) => !/5th percentile$/.test(item.text),
+        },
+      },
       tooltip: { enabled: responsive },
     },
   };

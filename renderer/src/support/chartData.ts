@@ -11,16 +11,21 @@ import { dragCoefficient, liftToDrag, polarCoefficients } from '../../../core/po
 import { displayValue } from '../../../core/format.ts';
 import { UNITS, UNIT_SYSTEMS, type Quantity, type UnitSystemId } from '../../../core/units.ts';
 import { horizontalMark, verticalMark, type ChartSpec, type Series, type XY } from './chartSpec.ts';
+import type { BandPoint } from './confidence.ts';
 
 const label = (q: Quantity, system: UnitSystemId) => UNITS[UNIT_SYSTEMS[system][q]].label;
 
 export type ProfileAxis = 'distance' | 'time';
 
-/** Altitude and fuel (or battery state of charge) along the mission, by distance or time. */
+/**
+ * Altitude and fuel (or battery state of charge) along the mission, by distance or time;
+ * with a Monte Carlo run, the 5th to 95th percentile of what is on board at each leg end.
+ */
 export function profileChart(
   result: PlanResult,
   axis: ProfileAxis,
   system: UnitSystemId,
+  band: readonly BandPoint[] = [],
 ): ChartSpec {
   const battery = result.consumable === 'battery';
   const startEnergy = result.legs[0]?.start.energy_J ?? 0;
@@ -61,6 +66,33 @@ export function profileChart(
   ];
   if (failed.length > 0)
     series.push({ label: 'Leg that fails', role: 'fail', axis: 'y', points: failed });
+  if (band.length > 1) {
+    const y = (v: number) =>
+      battery
+        ? startEnergy > 0
+          ? (100 * v) / startEnergy
+          : 0
+        : displayValue(v, 'fuelMass', system, { decimals: 3 });
+    const x = (b: BandPoint) =>
+      axis === 'distance'
+        ? displayValue(b.x_m, 'distance', system, { decimals: 3 })
+        : displayValue(b.t_s, 'time', system, { decimals: 3 });
+    const what = battery ? 'Charge' : 'Fuel';
+    series.push(
+      {
+        label: `${what}, 5th percentile`,
+        role: 'bandLow',
+        axis: 'y2',
+        points: band.map((b) => ({ x: x(b), y: y(b.p5) })),
+      },
+      {
+        label: `${what}, 5–95 % of simulated flights`,
+        role: 'bandHigh',
+        axis: 'y2',
+        points: band.map((b) => ({ x: x(b), y: y(b.p95) })),
+      },
+    );
+  }
   return {
     xTitle: axis === 'distance' ? `Ground distance (${label('distance', system)})` : 'Time (min)',
     yTitle: `Altitude (${label('altitude', system)})`,

@@ -1,9 +1,10 @@
 /**
  * chart.js, registered tree-shaken: only the scatter controller (lines between numeric
- * points) and what it needs, so the bundle stays small and nothing runs that we do not use.
+ * points) and what it needs (Filler for the Monte Carlo band), so the bundle stays small and nothing runs that we do not use.
  */
 import {
   Chart,
+  Filler,
   Legend,
   LinearScale,
   LineElement,
@@ -16,7 +17,15 @@ let done = false;
 
 export function registerCharts(): void {
   if (done) return;
-  Chart.register(ScatterController, LineElement, PointElement, LinearScale, Legend, Tooltip);
+  Chart.register(
+    ScatterController,
+    LineElement,
+    PointElement,
+    LinearScale,
+    Legend,
+    Tooltip,
+    Filler,
+  );
   Chart.defaults.font.family = 'system-ui, "Segoe UI", Roboto, "Helvetica Neue", Arial, sans-serif';
   done = true;
 }

@@ -17,7 +17,11 @@ export type SeriesRole =
   /** A vertical marker line (speeds, limits), dashed. */
   | 'mark'
   /** Something that fails, drawn in the failure colour. */
-  | 'fail';
+  | 'fail'
+  /** Lower edge of a shaded band (second-axis colour, no legend entry). */
+  | 'bandLow'
+  /** Upper edge of a shaded band, filled down to the `bandLow` series just before it. */
+  | 'bandHigh';
 
 export interface Series {
   label: string;

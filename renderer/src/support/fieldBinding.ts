@@ -5,8 +5,13 @@
  * the box and becomes NaN in the plan, so the plan check names the field and the result
  * goes stale instead of the keystroke being thrown away.
  */
-import { formatSignificant } from '../../../core/format.ts';
-import { convert, type UnitId } from '../../../core/units.ts';
+import {
+  formatNumber,
+  formatQuantity,
+  formatSignificant,
+  significantDecimals,
+} from '../../../core/format.ts';
+import { convert, toSI, type Quantity, type UnitId } from '../../../core/units.ts';
 
 export type FieldParse = { ok: true; value: number } | { ok: false; message: string };
 
@@ -34,19 +39,56 @@ export function storedFromText(text: string, displayUnit: UnitId, storedUnit: Un
 }
 
 /**
- * The text an input box shows for a stored value: up to `significant` digits (5 keeps a
- * converted value like 4500 m = 14764 ft readable), no grouping, no trailing zeros, never
- * exponent notation for the magnitudes a plan holds. Typed values are stored exactly.
+ * The text an input box shows for a stored value. A value the box can show exactly in at
+ * most 6 significant digits (4500 m, 1013.25 hPa, 80 %) is shown exactly. Anything else is a
+ * conversion that does not come out round (95 kg = 209.4357 lb): it is shown rounded to the
+ * display resolution of its quantity (core/format.ts, the same as the results), with up to
+ * one more place where that leaves fewer than 3 significant digits — or, without a quantity,
+ * to `significant` digits. Only the box text
+ * is rounded: the plan keeps its value until the person types in the box.
  */
 export function editableText(
   stored: number,
   storedUnit: UnitId,
   displayUnit: UnitId,
-  significant = 5,
+  quantityOrSignificant: Quantity | null | number = null,
 ): string {
   if (!Number.isFinite(stored)) return '';
   const shown = convert(stored, storedUnit, displayUnit);
-  return plainNumber(shown, significant);
+  const exact = exactText(shown, 6);
+  if (exact !== null) return exact;
+  if (typeof quantityOrSignificant === 'number') return plainNumber(shown, quantityOrSignificant);
+  if (quantityOrSignificant === null) return plainNumber(shown, 5);
+  // At least 3 significant digits, but at most one place finer than the results show.
+  const display = displayDecimals(stored, storedUnit, displayUnit, quantityOrSignificant);
+  const decimals = Math.min(Math.max(display, significantDecimals(shown, 3)), display + 1);
+  return trimZeros(formatNumber(shown, decimals));
+}
+
+/** The shortest text of at most `maxSignificant` digits that stands for `value` exactly, or null. */
+function exactText(value: number, maxSignificant: number): string | null {
+  for (let sig = 1; sig <= maxSignificant; sig++) {
+    const text = plainNumber(value, sig);
+    const back = Number(text);
+    const scale = Math.max(Math.abs(value), Number.MIN_VALUE);
+    if (Math.abs(back - value) / scale < 1e-9) return text;
+  }
+  return null;
+}
+
+/** Decimals the results show for this quantity in this unit (core/format.ts formatQuantity). */
+function displayDecimals(
+  stored: number,
+  storedUnit: UnitId,
+  displayUnit: UnitId,
+  quantity: Quantity,
+): number {
+  const text = formatQuantity(toSI(stored, storedUnit), quantity, 'si', {
+    unit: displayUnit,
+    withUnit: false,
+  });
+  const dot = text.indexOf('.');
+  return dot < 0 ? 0 : text.length - dot - 1;
 }
 
 /** A number for a box or a message: `significant` digits (core/format.ts), trailing zeros dropped. */

@@ -3,8 +3,9 @@
  * a leg's kind and how it ends…), not on its numbers. Keeping the same list objects while the
  * shape is unchanged lets Vue skip re-rendering every field on every keystroke.
  */
-import type { Leg, Plan } from '../../../core/plan/schema.ts';
+import type { Leg, Plan, WaypointData } from '../../../core/plan/schema.ts';
 import { aircraftSections, missionSections } from './aircraftFields.ts';
+import { airfieldSections, fieldDataSection } from './airfieldFields.ts';
 import type { FieldDef, FieldSection } from './fieldTypes.ts';
 import { legFields } from './legFields.ts';
 
@@ -34,8 +35,22 @@ export function aircraftShape(plan: Plan): string {
   ].join('|');
 }
 
-export function legShape(leg: Leg, index: number, electric: boolean): string {
+export function airfieldShape(plan: Plan): string {
+  const a = plan.airfield;
+  return a ? `${a.departure.by}|${a.arrival.by}` : '';
+}
+
+export function legShape(
+  leg: Leg,
+  index: number,
+  electric: boolean,
+  waypoints: readonly WaypointData[] = [],
+): string {
   const parts: unknown[] = [index, electric, leg.kind];
+  if ('wind' in leg) {
+    parts.push(leg.windSource ?? 'leg', leg.toWaypoint ? 'to' : '');
+    parts.push(waypoints.map((w) => `${w.id}:${w.name}`).join(','));
+  }
   if (leg.kind === 'takeoff' || leg.kind === 'landing') parts.push(leg.allowance.by);
   if (leg.kind === 'cruise' || leg.kind === 'loiter') parts.push(leg.end.by);
   if (leg.kind === 'climb' || leg.kind === 'cruise' || leg.kind === 'loiter')
@@ -50,11 +65,22 @@ export const isElectric = (plan: Plan) => plan.aircraft.powerplant.type === 'ele
 export function createFieldMemos(): {
   aircraft: (plan: Plan) => FieldSection[];
   mission: (plan: Plan) => FieldSection[];
-  leg: (leg: Leg, index: number, electric: boolean) => FieldDef[];
+  airfield: (plan: Plan) => FieldSection[];
+  leg: (
+    leg: Leg,
+    index: number,
+    electric: boolean,
+    waypoints?: readonly WaypointData[],
+    routeDistance?: boolean,
+  ) => FieldDef[];
 } {
   return {
     aircraft: lastKeyMemo(aircraftShape, aircraftSections),
     mission: lastKeyMemo((p: Plan) => String(isElectric(p)), missionSections),
+    airfield: lastKeyMemo(
+      (p: Plan) => `${airfieldShape(p)}|${p.aircraft.powerplant.type === 'jet'}`,
+      (p: Plan) => [...airfieldSections(p), fieldDataSection(p)],
+    ),
     leg: lastKeyMemo(legShape, legFields),
   };
 }

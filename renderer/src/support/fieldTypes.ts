@@ -2,7 +2,18 @@
  * Descriptions of the plan's editable fields: where the value lives (a dotted plan path),
  * which quantity it is (for the unit system) and the unit its key stores it in.
  */
+import type { Plan } from '../../../core/plan/schema.ts';
 import type { Quantity, UnitId } from '../../../core/units.ts';
+
+/**
+ * An optional block of the plan (`aircraft.field`, `uncertainty` …) that a field lives in.
+ * While the block is absent the field shows the value `create` would give it (the default
+ * the core applies), and the first edit writes the whole block with that value changed.
+ */
+export interface OptionalBlock {
+  path: string;
+  create: (plan: Plan) => unknown;
+}
 
 export interface NumberFieldDef {
   type: 'number';
@@ -15,6 +26,9 @@ export interface NumberFieldDef {
   /** May be left empty (the key is then removed). */
   optional?: boolean;
   hint?: string;
+  block?: OptionalBlock;
+  /** Significant digits shown for a plain number that is not exact in 6 (coordinates). */
+  digits?: number;
 }
 
 export interface ChoiceOption {
@@ -32,6 +46,10 @@ export interface ChoiceFieldDef {
    * chosen variant from the current one, carrying over what still applies.
    */
   variant?: (value: string, current: unknown) => unknown;
+  /** Shown while the plan has no value at `path` (an absent optional block). */
+  fallback?: string;
+  /** A choice that reshapes more of the plan than its parent object (adds or drops a block). */
+  apply?: (plan: Plan, value: string) => Plan;
 }
 
 export interface TextFieldDef {
@@ -54,7 +72,7 @@ export function num(
   label: string,
   quantity: Quantity | null,
   stored: UnitId,
-  extra: Partial<Pick<NumberFieldDef, 'optional' | 'hint'>> = {},
+  extra: Partial<Pick<NumberFieldDef, 'optional' | 'hint' | 'block' | 'digits'>> = {},
 ): NumberFieldDef {
   return { type: 'number', path, label, quantity, stored, ...extra };
 }

@@ -2,8 +2,9 @@
  * The fields of one leg, by kind. Discriminators (how the leg ends, how its speed is
  * chosen, how the allowance is given) are choices that rebuild their sub-object.
  */
-import type { Leg, LegKind } from '../../../core/plan/schema.ts';
+import type { Leg, LegKind, Plan, WaypointData } from '../../../core/plan/schema.ts';
 import { choice, num, text, type ChoiceOption, type FieldDef } from './fieldTypes.ts';
+import { setAtPath } from './paths.ts';
 
 export const LEG_KIND_NAMES: Readonly<Record<LegKind, string>> = {
   takeoff: 'Take-off',
@@ -58,12 +59,51 @@ function speedFields(
   return fields;
 }
 
-function trackFields(p: string): FieldDef[] {
-  return [
-    num(`${p}.course_deg`, 'Track (° true)', 'angle', 'deg'),
-    num(`${p}.wind.speed_m_s`, 'Wind speed', 'airspeed', 'm_s'),
-    num(`${p}.wind.from_deg`, 'Wind from (° true)', 'angle', 'deg'),
+type Track = { windSource?: 'leg' | 'aloft'; toWaypoint?: string };
+
+/** A choice whose default value is stored as an absent key (the plan file stays lean). */
+function optionalChoice(
+  path: string,
+  label: string,
+  options: ChoiceOption[],
+  absent: string,
+): FieldDef {
+  return {
+    ...choice(path, label, options),
+    fallback: absent,
+    apply: (plan: Plan, v: string) => setAtPath(plan, path, v === absent ? undefined : v),
+  };
+}
+
+function targetField(p: string, waypoints: readonly WaypointData[]): FieldDef[] {
+  if (waypoints.length === 0) return [];
+  const options = [
+    { value: '', label: '— none, own track —' },
+    ...waypoints.map((w, i) => ({ value: w.id, label: `${i + 1}. ${w.name.trim() || w.id}` })),
   ];
+  return [optionalChoice(`${p}.toWaypoint`, 'Flies to waypoint', options, '')];
+}
+
+function trackFields(p: string, leg: Track, waypoints: readonly WaypointData[]): FieldDef[] {
+  const fields: FieldDef[] = [...targetField(p, waypoints)];
+  if (!leg.toWaypoint) fields.push(num(`${p}.course_deg`, 'Track (° true)', 'angle', 'deg'));
+  fields.push(
+    optionalChoice(
+      `${p}.windSource`,
+      'Wind',
+      [
+        { value: 'leg', label: 'Own wind for this leg' },
+        { value: 'aloft', label: 'Winds-aloft table' },
+      ],
+      'leg',
+    ),
+  );
+  if (leg.windSource !== 'aloft')
+    fields.push(
+      num(`${p}.wind.speed_m_s`, 'Wind speed', 'airspeed', 'm_s'),
+      num(`${p}.wind.from_deg`, 'Wind from (° true)', 'angle', 'deg'),
+    );
+  return fields;
 }
 
 const ALLOWANCE_DEFAULTS: Record<string, unknown> = {
@@ -101,7 +141,13 @@ function allowanceFields(p: string, by: string, electric: boolean): FieldDef[] {
  * Every editable field of leg `index`, with absolute plan paths. Options that the plan
  * check refuses for the powerplant (fuel for a battery, energy for a fuel burner) are left out.
  */
-export function legFields(leg: Leg, index: number, electric = false): FieldDef[] {
+export function legFields(
+  leg: Leg,
+  index: number,
+  electric = false,
+  waypoints: readonly WaypointData[] = [],
+  routeDistance = false,
+): FieldDef[] {
   const p = `legs.${index}`;
   const label = text(`${p}.label`, 'Label');
   switch (leg.kind) {
@@ -114,7 +160,7 @@ export function legFields(leg: Leg, index: number, electric = false): FieldDef[]
         num(`${p}.toAltitude_m`, 'Climb to altitude', 'altitude', 'm'),
         ...speedFields(`${p}.speed`, { value: 'bestRate', label: 'Best rate of climb' }, leg.speed),
         num(`${p}.throttle`, 'Throttle (of max)', 'ratio', 'fraction'),
-        ...trackFields(p),
+        ...trackFields(p, leg, waypoints),
       ];
     case 'cruise':
       return [
@@ -135,11 +181,14 @@ export function legFields(leg: Leg, index: number, electric = false): FieldDef[]
                 ? { by, energy_J: 1e6 }
                 : { by: 'distance', distance_m: 100_000 },
         ),
-        leg.end.by === 'distance'
-          ? num(`${p}.end.distance_m`, 'Ground distance', 'distance', 'm')
+        // The cruise that flies the rest of a route leg takes its distance from the route.
+        ...(leg.end.by === 'distance'
+          ? routeDistance
+            ? []
+            : [num(`${p}.end.distance_m`, 'Ground distance', 'distance', 'm')]
           : leg.end.by === 'fuel'
-            ? num(`${p}.end.fuel_kg`, 'Fuel to burn', 'fuelMass', 'kg')
-            : num(`${p}.end.energy_J`, 'Energy to use', 'energy', 'J'),
+            ? [num(`${p}.end.fuel_kg`, 'Fuel to burn', 'fuelMass', 'kg')]
+            : [num(`${p}.end.energy_J`, 'Energy to use', 'energy', 'J')]),
         ...speedFields(
           `${p}.speed`,
           { value: 'bestRange', label: 'Best range in the wind' },
@@ -149,7 +198,7 @@ export function legFields(leg: Leg, index: number, electric = false): FieldDef[]
           { value: 'constantAltitude', label: 'Constant altitude' },
           { value: 'cruiseClimb', label: 'Cruise-climb (constant CL)' },
         ]),
-        ...trackFields(p),
+        ...trackFields(p, leg, waypoints),
       ];
     case 'loiter':
       return [
@@ -169,7 +218,7 @@ export function legFields(leg: Leg, index: number, electric = false): FieldDef[]
           { value: 'bestEndurance', label: 'Best endurance' },
           leg.speed,
         ),
-        ...trackFields(p),
+        ...trackFields(p, leg, waypoints),
       ];
     case 'descent':
       return [
@@ -193,7 +242,7 @@ export function legFields(leg: Leg, index: number, electric = false): FieldDef[]
               ...speedFields(`${p}.mode.speed`, null, leg.mode.speed),
             ]
           : []),
-        ...trackFields(p),
+        ...trackFields(p, leg, waypoints),
       ];
   }
 }

@@ -15,8 +15,11 @@ type Fmt = (
   quantity: 'altitude' | 'distance' | 'time' | 'fuelMass' | 'energy' | 'airspeed',
 ) => string;
 
-/** One line on what the leg does, e.g. "to 1500 m, best rate" or "120.0 km at best range". */
-export function legSummary(leg: Leg, fmt: Fmt): string {
+/**
+ * One line on what the leg does, e.g. "to 1500 m, best rate" or "120.0 km at best range";
+ * a cruise whose distance the route sets says where it goes instead ("to Lake at best range").
+ */
+export function legSummary(leg: Leg, fmt: Fmt, routeTo?: string): string {
   switch (leg.kind) {
     case 'takeoff':
     case 'landing': {
@@ -31,7 +34,9 @@ export function legSummary(leg: Leg, fmt: Fmt): string {
     case 'cruise': {
       const end =
         leg.end.by === 'distance'
-          ? fmt(leg.end.distance_m, 'distance')
+          ? routeTo !== undefined
+            ? `to ${routeTo}`
+            : fmt(leg.end.distance_m, 'distance')
           : leg.end.by === 'fuel'
             ? `${fmt(leg.end.fuel_kg, 'fuelMass')} fuel`
             : `${fmt(leg.end.energy_J, 'energy')}`;

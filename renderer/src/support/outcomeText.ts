@@ -3,29 +3,13 @@
  * display units, the verdict sentence, the consumable columns.
  */
 import type { Check, PlanResult } from '../../../core/solver/types.ts';
-import type { Quantity } from '../../../core/units.ts';
+import { checkAmount } from '../../../core/solver/describe.ts';
+import type { Quantity, UnitSystemId } from '../../../core/units.ts';
 import { formatNumber } from '../../../core/format.ts';
 
-type Format = (value_si: number, quantity: Quantity) => string;
-type Plain = (value: number, sig?: number) => string;
-
-const CHECK_QUANTITY: Record<Check['quantity'], Quantity | null> = {
-  mass: 'mass',
-  fuelMass: 'fuelMass',
-  energy: 'energy',
-  power: 'power',
-  altitude: 'altitude',
-  verticalSpeed: 'verticalSpeed',
-  volume: 'fuelVolume',
-  distance: 'distance',
-  ratio: null,
-};
-
-/** "value / limit" in display units, e.g. "1 043 kg of 1 100 kg" style kept short. */
-export function checkFigures(check: Check, format: Format, plain: Plain): string {
-  const q = CHECK_QUANTITY[check.quantity];
-  const show = (v: number) => (q ? format(v, q) : plain(v, 3));
-  return `${show(check.value)} vs limit ${show(check.limit)}`;
+/** "value vs limit" in display units (core/solver/describe.ts: runway lengths in m or ft). */
+export function checkFigures(check: Check, system: UnitSystemId): string {
+  return `${checkAmount(check, check.value, system)} vs limit ${checkAmount(check, check.limit, system)}`;
 }
 
 export function marginText(check: Check): string {
