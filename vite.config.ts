@@ -3,15 +3,34 @@
  * with relative asset paths (base './') so that Electron can load it from file://.
  */
 import { fileURLToPath } from 'node:url';
-import { defineConfig } from 'vite';
+import { defineConfig, type Plugin } from 'vite';
 import vue from '@vitejs/plugin-vue';
+import { CONTENT_SECURITY_POLICY } from './electron/security.ts';
 
 const projectRoot = fileURLToPath(new URL('.', import.meta.url));
+
+const CSP_META = /(<meta\s+http-equiv="Content-Security-Policy"\s+content=")[^"]*(")/;
+
+/**
+ * The source index.html allows ws: for the dev server's hot reload; the built page gets
+ * exactly the desktop shell's canonical policy (electron/security.ts), so the two never drift.
+ */
+export function builtPageCsp(): Plugin {
+  return {
+    name: 'legwise-built-page-csp',
+    apply: 'build',
+    transformIndexHtml(html) {
+      if (!CSP_META.test(html))
+        throw new Error('index.html has no Content-Security-Policy meta tag');
+      return html.replace(CSP_META, `$1${CONTENT_SECURITY_POLICY}$2`);
+    },
+  };
+}
 
 export default defineConfig({
   root: fileURLToPath(new URL('./renderer', import.meta.url)),
   base: './',
-  plugins: [vue()],
+  plugins: [vue(), builtPageCsp()],
   build: {
     outDir: fileURLToPath(new URL('./dist', import.meta.url)),
     emptyOutDir: true,
