@@ -18,6 +18,7 @@ export const INVOKE_METHODS = [
   'discardAutosave',
   'exportPdf',
   'exportCsv',
+  'exportGpx',
 ] as const;
 
 export type InvokeMethod = (typeof INVOKE_METHODS)[number];
@@ -37,10 +38,12 @@ export const SIMPLE_MENU_COMMANDS = [
   'saveAs',
   'exportPdf',
   'exportCsv',
+  'exportGpx',
 ] as const;
 
-export type MenuCommand =
-  { kind: (typeof SIMPLE_MENU_COMMANDS)[number] } | { kind: 'openRecent'; filePath: string };
+export type SimpleMenuCommand = (typeof SIMPLE_MENU_COMMANDS)[number];
+
+export type MenuCommand = { kind: SimpleMenuCommand } | { kind: 'openRecent'; filePath: string };
 
 /** Guards what arrives on MENU_COMMAND_CHANNEL before the page's callback sees it. */
 export function isMenuCommand(value: unknown): value is MenuCommand {

@@ -59,7 +59,9 @@ export interface RecoveredPlan {
 /** Limits keep a misbehaving page from pushing huge strings through IPC. */
 const filePathArg = z.string().min(1).max(4096);
 const suggestedName = z.string().max(200);
-const MAX_CSV_CHARS = 20_000_000;
+/** Longest CSV or GPX text accepted (characters): far above any real plan's table or route. */
+const MAX_TEXT_CHARS = 20_000_000;
+const textExport = z.tuple([z.object({ text: z.string().max(MAX_TEXT_CHARS), suggestedName })]);
 
 /** Carries the result type of a channel beside its argument schema. */
 export interface Channel<A extends z.ZodType<readonly unknown[]>, R> {
@@ -93,9 +95,9 @@ export const contract = {
   /** Print the current page (its print styles) to PDF and save it where the person chooses. */
   exportPdf: channel<Outcome<SavedFile>>()(z.tuple([z.object({ suggestedName })])),
   /** Save CSV text the page produced. */
-  exportCsv: channel<Outcome<SavedFile>>()(
-    z.tuple([z.object({ text: z.string().max(MAX_CSV_CHARS), suggestedName })]),
-  ),
+  exportCsv: channel<Outcome<SavedFile>>()(textExport),
+  /** Save the route as GPX text the page produced. */
+  exportGpx: channel<Outcome<SavedFile>>()(textExport),
 } satisfies { [K in InvokeMethod]: Channel<z.ZodType<readonly unknown[]>, unknown> };
 
 export type Contract = typeof contract;

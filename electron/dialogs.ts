@@ -11,6 +11,7 @@ const FILTERS: Record<SaveKind, FileFilter[]> = {
   plan: [{ name: 'Legwise plan', extensions: ['json'] }],
   pdf: [{ name: 'PDF document', extensions: ['pdf'] }],
   csv: [{ name: 'CSV table', extensions: ['csv'] }],
+  gpx: [{ name: 'GPX route', extensions: ['gpx'] }],
 };
 
 type DialogPorts = Pick<

@@ -31,7 +31,7 @@ import {
   type WriteOps,
 } from './files.ts';
 
-export type SaveKind = 'plan' | 'pdf' | 'csv';
+export type SaveKind = 'plan' | 'pdf' | 'csv' | 'gpx';
 export type CloseChoice = 'save' | 'discard' | 'cancel';
 
 /** What the document needs from Electron; main.ts supplies dialogs and the window. */
@@ -140,7 +140,12 @@ export function createDocument(ports: ShellPorts) {
     suggestedName: string,
     produce: () => Promise<Uint8Array | string>,
   ): Promise<Outcome<{ filePath: string }>> {
-    const target = await ports.chooseSavePath(kind, safeFileName(suggestedName, `.${kind}`));
+    // The page may already name the extension ("Coast run.csv"); add it only once.
+    const extension = `.${kind}`;
+    const stem = suggestedName.toLowerCase().endsWith(extension)
+      ? suggestedName.slice(0, -extension.length)
+      : suggestedName;
+    const target = await ports.chooseSavePath(kind, safeFileName(stem, extension));
     if (target === null) return failure('CANCELLED', 'Export cancelled.');
     try {
       await atomicWrite(target, await produce(), ports.writeOps ? { ops: ports.writeOps } : {});
@@ -209,6 +214,7 @@ export function createDocument(ports: ShellPorts) {
     },
     exportPdf: ({ suggestedName }) => exportBytes('pdf', suggestedName, () => ports.printPdf()),
     exportCsv: ({ text, suggestedName }) => exportBytes('csv', suggestedName, async () => text),
+    exportGpx: ({ text, suggestedName }) => exportBytes('gpx', suggestedName, async () => text),
   };
 
   /**

@@ -5,7 +5,7 @@
  * Shortcuts use CmdOrCtrl so they read ⌘ on macOS and Ctrl elsewhere.
  */
 import type { MenuItemConstructorOptions } from 'electron';
-import type { MenuCommand } from './channels.ts';
+import type { MenuCommand, SimpleMenuCommand } from './channels.ts';
 import type { RecentFile } from './contract.ts';
 
 export interface MenuHandlers {
@@ -55,7 +55,7 @@ function fileMenu(
   handlers: MenuHandlers,
   options: MenuOptions,
 ): MenuItemConstructorOptions {
-  const send = (kind: keyof typeof ACCELERATORS) => () => handlers.command({ kind });
+  const send = (kind: SimpleMenuCommand) => () => handlers.command({ kind });
   const items: MenuItemConstructorOptions[] = [
     { label: 'New Plan', accelerator: ACCELERATORS.new, click: send('new') },
     { label: 'Open…', accelerator: ACCELERATORS.open, click: send('open') },
@@ -74,6 +74,7 @@ function fileMenu(
       accelerator: ACCELERATORS.exportCsv,
       click: send('exportCsv'),
     },
+    { label: 'Export Route as GPX…', click: send('exportGpx') },
   ];
   if (platform === 'darwin') items.push({ type: 'separator' }, { role: 'close' });
   else {

@@ -31,6 +31,7 @@ const api: LegwiseApi = {
   discardAutosave: () => invoke('discardAutosave'),
   exportPdf: (options) => invoke('exportPdf', options),
   exportCsv: (options) => invoke('exportCsv', options),
+  exportGpx: (options) => invoke('exportGpx', options),
   onMenuCommand(callback: (command: MenuCommand) => void) {
     // The page gets the command only, never the IPC event (it would expose the sender).
     const listener = (_event: IpcRendererEvent, command: unknown) => {

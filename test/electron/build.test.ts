@@ -84,11 +84,13 @@ describe('electron/build.mjs', () => {
     await api.savePlan(plan);
     await api.openRecent('/plans/a.legwise.json');
     await api.exportCsv({ text: 'a,b\n', suggestedName: 'r' });
+    await api.exportGpx({ text: '<gpx/>', suggestedName: 'r.gpx' });
     await api.listRecent();
     expect(electron.ipcRenderer.invoke.mock.calls).toEqual([
       [channelOf('savePlan'), plan],
       [channelOf('openRecent'), '/plans/a.legwise.json'],
       [channelOf('exportCsv'), { text: 'a,b\n', suggestedName: 'r' }],
+      [channelOf('exportGpx'), { text: '<gpx/>', suggestedName: 'r.gpx' }],
       [channelOf('listRecent')],
     ]);
   });
@@ -101,11 +103,13 @@ describe('electron/build.mjs', () => {
     const deliver = listeners.get(MENU_COMMAND_CHANNEL);
     const event = { sender: 'ipc internals' };
     deliver?.(event, { kind: 'save' });
+    deliver?.(event, { kind: 'exportGpx' });
     deliver?.(event, { kind: 'openRecent', filePath: '/plans/b.legwise.json' });
     deliver?.(event, { kind: 'format-disk' });
     deliver?.(event, 'save');
     expect(seen).toEqual([
       { kind: 'save' },
+      { kind: 'exportGpx' },
       { kind: 'openRecent', filePath: '/plans/b.legwise.json' },
     ]);
     unsubscribe();

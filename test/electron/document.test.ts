@@ -238,6 +238,31 @@ describe('exports', () => {
     expect(await fsp.readFile(csv, 'utf8')).toBe('leg,time_s\n1,60\n');
   });
 
+  it('saves the page’s GPX with a .gpx name, adding the extension only once', async () => {
+    const gpx = path.join(dir, 'route.gpx');
+    const save = vi.fn(async () => gpx);
+    const doc = createDocument(ports({ chooseSavePath: save }));
+    const text = '<?xml version="1.0"?><gpx version="1.1"></gpx>\n';
+    expect(await doc.handlers.exportGpx({ text, suggestedName: 'Coast run.gpx' })).toEqual({
+      ok: true,
+      filePath: gpx,
+    });
+    expect(save).toHaveBeenLastCalledWith('gpx', 'Coast run.gpx');
+    expect(await fsp.readFile(gpx, 'utf8')).toBe(text);
+    await doc.handlers.exportGpx({ text, suggestedName: 'Coast run' });
+    expect(save).toHaveBeenLastCalledWith('gpx', 'Coast run.gpx');
+    await doc.handlers.exportCsv({ text: 'a\n', suggestedName: 'Coast run.CSV' });
+    expect(save).toHaveBeenLastCalledWith('csv', 'Coast run.csv');
+  });
+
+  it('reports a GPX export the person cancelled, writing nothing', async () => {
+    const doc = createDocument(ports());
+    expect(
+      await doc.handlers.exportGpx({ text: '<gpx/>', suggestedName: 'Coast run' }),
+    ).toMatchObject({ ok: false, code: 'CANCELLED' });
+    expect(await fsp.readdir(dir)).toEqual([]);
+  });
+
   it('does not print when the export dialog is cancelled', async () => {
     const p = ports();
     expect(await createDocument(p).handlers.exportPdf({ suggestedName: 'x' })).toMatchObject({

@@ -51,6 +51,12 @@ describe('dispatch', () => {
       ['openRecent', ['']],
       ['setDirty', [{ dirty: 'yes', name: 'x' }]],
       ['exportCsv', [{ text: 5, suggestedName: 'r' }]],
+      ['exportGpx', [{ text: 5, suggestedName: 'r' }]],
+      ['exportGpx', [{ text: '<gpx/>' }]],
+      ['exportGpx', [{ text: '<gpx/>', suggestedName: 'r'.repeat(201) }]],
+      // One character over the contract's text limit (electron/contract.ts, MAX_TEXT_CHARS).
+      ['exportGpx', [{ text: 'x'.repeat(20_000_001), suggestedName: 'r' }]],
+      ['exportGpx', []],
       ['listRecent', ['extra']],
     ];
     for (const [method, args] of cases) {

@@ -61,6 +61,22 @@ describe('electron/main.ts', () => {
     });
   });
 
+  it('saves the page’s GPX through a save dialog filtered to .gpx', async () => {
+    const target = path.join(app.userData, 'Coast run.gpx');
+    dialog.showSaveDialog.mockResolvedValueOnce({ canceled: false, filePath: target });
+    const text = '<?xml version="1.0"?><gpx version="1.1"></gpx>\n';
+    expect(await invoke('exportGpx', { text, suggestedName: 'Coast run.gpx' })).toEqual({
+      ok: true,
+      filePath: target,
+    });
+    expect(dialog.showSaveDialog).toHaveBeenLastCalledWith(win, {
+      title: 'Export',
+      defaultPath: path.join(app.getPath('documents'), 'Coast run.gpx'),
+      filters: [{ name: 'GPX route', extensions: ['gpx'] }],
+    });
+    expect(await fsp.readFile(target, 'utf8')).toBe(text);
+  });
+
   it('shows unsaved changes in the title and asks before closing', async () => {
     await invoke('setDirty', { dirty: true, name: 'Coast run' });
     expect(win.title).toBe('• Coast run — Legwise');

@@ -32,6 +32,20 @@ describe('buildMenuTemplate', () => {
     }
   });
 
+  it('offers Export Route as GPX… after the CSV export, without a shortcut', () => {
+    for (const platform of ['darwin', 'linux', 'win32'] as const) {
+      const h = handlers();
+      const t = buildMenuTemplate(platform, h, options);
+      const file = t.find((m) => m.label === 'File')?.submenu as MenuItemConstructorOptions[];
+      const labels = file.map((i) => i.label);
+      const gpx = labels.indexOf('Export Route as GPX…');
+      expect(gpx, platform).toBe(labels.indexOf('Export Results as CSV…') + 1);
+      expect(file[gpx]?.accelerator).toBeUndefined();
+      click(file[gpx]);
+      expect(h.command).toHaveBeenCalledWith({ kind: 'exportGpx' });
+    }
+  });
+
   it('on macOS puts About and Quit (Cmd+Q) in an app menu named Legwise', () => {
     const t = buildMenuTemplate('darwin', handlers(), options);
     expect(t[0]?.label).toBe('Legwise');

@@ -1,5 +1,5 @@
 /**
- * New, open, save, CSV export, printed report and crash insurance. Inside the desktop
+ * New, open, save, CSV and GPX export, printed report and crash insurance. Inside the desktop
  * shell these go through `window.legwise` (dialogs, atomic writes, PDF); in a plain browser
  * they fall back to a file picker, downloads, localStorage and the print dialog.
  */
@@ -14,6 +14,10 @@ import type { Units } from './useUnits.ts';
 import { buildLegCsv, fileStem } from '../support/csv.ts';
 import { readSetting, writeSetting } from '../support/settingsStore.ts';
 import { download } from '../support/download.ts';
+import { routeGpx } from '../support/routeExport.ts';
+
+/** How an export ended; `status` says where the file went or why not (unchanged if cancelled). */
+export type ExportOutcome = 'saved' | 'failed' | 'cancelled';
 
 export interface FileActions {
   /** One line on what the last action did (shown in the status area). */
@@ -26,6 +30,10 @@ export interface FileActions {
   open(): Promise<void>;
   save(as?: boolean): Promise<void>;
   exportCsv(): Promise<void>;
+  /** Saves GPX text through the shell's save dialog, or as a browser download. */
+  exportGpx(text: string, name: string): Promise<ExportOutcome>;
+  /** Exports the plan's route as GPX, with estimates at the waypoints when it can. */
+  exportRoute(): Promise<ExportOutcome>;
   printReport(): Promise<void>;
   restoreRecovered(): void;
   discardRecovered(): Promise<void>;
@@ -137,6 +145,38 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     status.value = 'Table downloaded as CSV.';
   }
 
+  /** `detail` follows the "saved to …" part of the status line. */
+  async function saveGpx(text: string, name: string, detail = ''): Promise<ExportOutcome> {
+    if (api) {
+      const out = await api.exportGpx({ text, suggestedName: name });
+      if (out.ok) {
+        status.value = `Route saved to ${out.filePath}${detail}.`;
+        return 'saved';
+      }
+      if (out.code === 'CANCELLED') return 'cancelled';
+      status.value = out.message;
+      return 'failed';
+    }
+    download(text, name, 'application/gpx+xml');
+    status.value = `Route downloaded as GPX${detail}.`;
+    return 'saved';
+  }
+
+  async function exportRoute(): Promise<ExportOutcome> {
+    const p = plan.lastValid.value;
+    if (!p.route) {
+      status.value = plan.draft.value.route
+        ? 'Cannot export the route: fix the marked fields first.'
+        : 'No route to export: add waypoints on the Route tab first.';
+      return 'failed';
+    }
+    const gpx = routeGpx(p, result.result.value);
+    const detail = gpx.withEstimates
+      ? ', with the time and fuel or charge expected at each waypoint'
+      : ', without estimates: some waypoint is not reached by a flown leg';
+    return saveGpx(gpx.text, `${fileStem(p.name)}.gpx`, detail);
+  }
+
   async function printReport(): Promise<void> {
     const name = `${fileStem(plan.lastValid.value.name)}.pdf`;
     // The shell prints to PDF without a beforeprint event, and window.print() blocks before
@@ -187,6 +227,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
       saveAs: () => save(true),
       exportPdf: printReport,
       exportCsv,
+      exportGpx: async () => void (await exportRoute()),
       openRecent: async () => {
         if (!api || command.kind !== 'openRecent') return;
         const r = await api.openRecent(command.filePath);
@@ -233,6 +274,8 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     open,
     save,
     exportCsv,
+    exportGpx: (text, name) => saveGpx(text, name),
+    exportRoute,
     printReport,
     restoreRecovered,
     discardRecovered,
