@@ -35,13 +35,12 @@ export function renderMonteCarloText(mc: ReserveMonteCarloResult, units: UnitSys
     `Reserve Monte Carlo: ${mc.samples} simulated flights (random seed ${mc.seed})`,
     `  ${keptSentence(mc)}`,
   ];
-  const notKept = Math.round(mc.probabilityReserveNotKept * mc.samples);
-  lines.push(
-    `  Reserve not kept in ${notKept} of ${mc.samples} samples` +
-      (mc.failedFraction > 0
-        ? `, ${Math.round(mc.failedFraction * mc.samples)} of them with a leg that cannot be flown.`
-        : '.'),
-  );
+  if (mc.failedFraction > 0) {
+    const failed = Math.round(mc.failedFraction * mc.samples);
+    lines.push(
+      `  ${failed} of the ${mc.samples} simulated flights ${failed === 1 ? 'has' : 'have'} a leg that cannot be flown.`,
+    );
+  }
   const d = mc.margin;
   if (d === null) {
     lines.push('  No simulated flight completed the mission.');

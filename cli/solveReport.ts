@@ -11,7 +11,7 @@ import {
   unitLabel,
 } from '../core/format.ts';
 import type { Plan } from '../core/plan/schema.ts';
-import { checkAmount, describeCheck } from '../core/solver/describe.ts';
+import { checkFigures, describeCheck } from '../core/solver/describe.ts';
 import { routeProgress } from '../core/solver/routeProgress.ts';
 import type { CheckState, LegResult, PlanResult, Span } from '../core/solver/types.ts';
 import type { ReserveMonteCarloResult } from '../core/uncertainty/reserveMonteCarlo.ts';
@@ -112,14 +112,34 @@ export { checkAmount } from '../core/solver/describe.ts';
 
 const STATE_WORD: Record<CheckState, string> = { ok: 'ok', tight: 'TIGHT', fails: 'FAILS' };
 
+/** One row per check: the label names the leg, the sentence does not repeat it. */
 function checkRows(result: PlanResult, units: UnitSystemId): string[][] {
-  return result.checks.map((c) => [
-    STATE_WORD[c.state],
-    c.label,
-    `${checkAmount(c, c.value, units)} / ${checkAmount(c, c.limit, units)}`,
-    formatQuantity(c.margin, 'ratio', units, { signed: true }),
-    describeCheck(c, units),
-  ]);
+  return result.checks.map((c) => {
+    const { value, limit } = checkFigures(c, units);
+    return [
+      STATE_WORD[c.state],
+      c.label,
+      `${value} / ${limit}`,
+      formatQuantity(c.margin, 'ratio', units, { signed: true }),
+      describeCheck(c, units),
+    ];
+  });
+}
+
+/**
+ * " (40.2 % of usable energy; pack at 46.2 % of nominal)": the charge on landing as a share of
+ * the usable energy, and of the pack's nominal energy with the unusable share counted as kept
+ * (nominal = usable / usableFraction).
+ */
+function chargeWords(plan: Plan, result: PlanResult, units: UnitSystemId): string {
+  if (result.consumable !== 'battery') return '';
+  const soc = result.landing.soc;
+  const pp = plan.aircraft.powerplant;
+  const pack =
+    pp.type === 'electric'
+      ? `; pack at ${formatQuantity(1 - pp.battery.usableFraction * (1 - soc), 'ratio', units)} of nominal`
+      : '';
+  return ` (${formatQuantity(soc, 'ratio', units)} of usable energy${pack})`;
 }
 
 export function verdictLine(result: PlanResult): string {
@@ -158,10 +178,7 @@ export function renderSolveText(
     if (leg.status === 'failed')
       lines.push(`  ! leg ${leg.index + 1} failed: ${leg.error ?? 'no reason given'}`);
   }
-  const soc =
-    result.consumable === 'battery'
-      ? ` (state of charge ${formatQuantity(result.landing.soc, 'ratio', units)})`
-      : '';
+  const soc = chargeWords(plan, result, units);
   lines.push('');
   lines.push(
     `On landing: ${formatQuantity(result.landing.remaining, c, units)} left${soc}; reserve required ` +

@@ -5,7 +5,10 @@
  * the whole plan many times; one that cannot apply to this plan (no climb before the cruise,
  * say) reports why instead of stopping the others.
  */
-import { bestCruiseAltitude } from '../core/optimize/altitudeSweep.ts';
+import {
+  bestCruiseAltitude,
+  MIN_HEIGHT_ABOVE_DEPARTURE_M,
+} from '../core/optimize/altitudeSweep.ts';
 import type { AltitudeSweepResult } from '../core/optimize/altitudeSweep.ts';
 import { maxPayload } from '../core/optimize/maxPayload.ts';
 import type { MaxPayloadResult } from '../core/optimize/maxPayload.ts';
@@ -112,10 +115,20 @@ export function renderTuneText(report: TuneReport, units: UnitSystemId): string 
     lines.push('  no altitude up to the ceiling lets the whole mission be flown');
   else {
     const { altitude_m, remaining } = alt.value.best;
+    // The sweep starts MIN_HEIGHT_ABOVE_DEPARTURE_M above the field: a plan cruising lower
+    // can do better than every altitude tried.
     const better =
-      remaining < report.baseline.landingRemaining ? '; the plan as given does better' : '';
+      remaining < report.baseline.landingRemaining
+        ? `; the plan as given does better — the sweep starts ${formatQuantity(MIN_HEIGHT_ABOVE_DEPARTURE_M, 'altitude', units)} above the departure field, at ${formatQuantity(alt.value.bottom_m, 'altitude', units)}`
+        : '';
+    const limit =
+      alt.value.limitedBy === 'ceiling'
+        ? ', limited by the ceiling'
+        : alt.value.limitedBy === 'climb'
+          ? ', limited by the highest altitude the climb reaches'
+          : '';
     lines.push(
-      `  ${formatQuantity(altitude_m, 'altitude', units)}: ${amount(remaining)} left on landing ` +
+      `  ${formatQuantity(altitude_m, 'altitude', units)}${limit}: ${amount(remaining)} left on landing ` +
         `(plan as given: ${amount(report.baseline.landingRemaining)}${better})`,
     );
   }

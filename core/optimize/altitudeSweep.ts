@@ -41,6 +41,13 @@ export interface AltitudeSweepResult {
   curve: { altitude_m: number[]; remaining: number[]; feasible: boolean[] };
   /** Top of the grid: the ceiling, or the highest altitude the climb reaches if lower. */
   top_m: number;
+  /** Bottom of the grid: MIN_HEIGHT_ABOVE_DEPARTURE_M above the departure elevation. */
+  bottom_m: number;
+  /**
+   * The best altitude is the top of the grid (within 1 m): set by the ceiling, or by the
+   * highest altitude the climb reaches; null when it lies below the top.
+   */
+  limitedBy: 'ceiling' | 'climb' | null;
 }
 
 /** The climb legs before the first cruise leg, which set the cruise altitude. */
@@ -129,9 +136,12 @@ export function bestCruiseAltitude(
       goldenSectionMax(remainingAt, Math.max(lo, h0 - step), Math.min(top, h0 + step), 1, best) ??
       best;
   }
+  const atTop = best !== null && top - best.x <= 1;
   return {
     best: best === null ? null : { altitude_m: best.x, remaining: best.value },
     curve,
     top_m: top,
+    bottom_m: lo,
+    limitedBy: atTop ? (top === ceiling ? 'ceiling' : 'climb') : null,
   };
 }

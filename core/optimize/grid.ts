@@ -88,7 +88,7 @@ export function speedAltitudeSweep(
     const row: (number | null)[] = [];
     for (const v of speeds_m_s) {
       speed.speed_m_s = v;
-      const start: MissionState = { t_s: 0, x_m: 0, air_m: 0, h_m, mass_kg, left };
+      const start: MissionState = { t_s: 0, x_m: 0, air_m: 0, path_m: 0, h_m, mass_kg, left };
       const out = flyLeg(ctx, leg, start, loiterConsume);
       grid.steps += out.result.steps;
       grid.legsFlown++;

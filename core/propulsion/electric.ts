@@ -6,6 +6,11 @@
  * P = V·i) the nominal energy lasts t = Rt^(1−n)·(E/P)^n, i.e. the pack drains as if at the
  * rate E/t = P·(P·Rt/E)^(n−1) — equal to P at n = 1 and larger than P when the pack is
  * discharged faster than its rated time.
+ *
+ * Applied only at or above the rated discharge power E/Rt: below it the same formula would
+ * credit more than the rated energy (a drain below P), which the rated capacity does not
+ * support — Traub fits the correction to discharges at and above the rated current (from
+ * memory). So the drain is P for P·Rt/E < 1 (conservative; continuous at P = E/Rt).
  */
 import { requireFinite, requirePositive } from '../errors.ts';
 import type { Battery, ElectricPowerplant } from '../plan/schema.ts';
@@ -38,12 +43,16 @@ export function usableEnergy_J(battery: Battery): number {
   );
 }
 
-/** Rate at which the nominal energy is used up, P·(P·Rt/E_nominal)^(n−1) (Traub 2011). */
+/**
+ * Rate at which the nominal energy is used up: P·(P·Rt/E_nominal)^(n−1) at or above the rated
+ * discharge power E_nominal/Rt (Traub 2011), P below it.
+ */
 export function peukertDrainRate_W(battery: Battery, batteryPower_W: number): number {
   const P = requireFinite('batteryPower_W', batteryPower_W, 0, Infinity, 'W');
   const E = requirePositive('energy_J', battery.energy_J, 'J');
   const n = requireFinite('peukertExponent', battery.peukertExponent, 1, Infinity);
   const Rt = requirePositive('ratedDischargeTime_s', battery.ratedDischargeTime_s, 's');
-  if (P === 0) return 0;
-  return P * Math.pow((P * Rt) / E, n - 1);
+  const x = (P * Rt) / E;
+  if (!(x > 1)) return P;
+  return P * Math.pow(x, n - 1);
 }

@@ -5,6 +5,9 @@
  * ch. 3, from memory). Fuel flow ṁ = TSFC·T with TSFC in kg/(N·s); the weight-specific
  * c_t = TSFC·g0 (1/s) is the consumption used by the Breguet forms (Anderson, Introduction
  * to Flight, ch. 6).
+ *
+ * Neither the maximum thrust nor the TSFC varies with Mach number here (real engines lose
+ * thrust and burn more per unit thrust as Mach rises): use values for the cruise Mach.
  */
 import type { AtmosphereState } from '../atmosphere.ts';
 import { requireFinite, requirePositive } from '../errors.ts';

@@ -1,8 +1,11 @@
 /**
  * Feasibility checks with margins (DESIGN.md §3, common practice): take-off mass ≤ MTOW,
  * fuel volume ≤ tank, reserve kept on landing, per leg speed ≥ stallFactor × V_stall, power
- * required ≤ available, rate of climb ≥ the service-ceiling rate; for the plan, the highest
- * altitude ≤ ceiling and the battery never below its floor (airfield checks: fieldChecks.ts).
+ * required ≤ available (for a jet also as thrust), rate of climb ≥ the service-ceiling rate;
+ * for the plan, the highest pressure altitude ≤ ceiling (an aircraft's ceiling is a pressure
+ * altitude: what the engine and wing see) and the battery never below its floor (airfield
+ * checks: fieldChecks.ts). A per-leg check names its leg in its label; its sentence does not
+ * repeat it.
  * Margin: (limit − value)/limit for upper limits, (value − limit)/limit for lower ones;
  * fails below 0, tight below settings.tightMargin.
  */
@@ -35,6 +38,8 @@ export interface CheckInput {
   factor?: number;
   reason?: string;
   incomplete?: boolean;
+  thrustRequired_N?: number;
+  thrustAvailable_N?: number;
 }
 
 export function makeCheck(c: CheckInput, tight: number): Check {
@@ -61,6 +66,8 @@ export function makeCheck(c: CheckInput, tight: number): Check {
   if (c.factor !== undefined) check.factor = c.factor;
   if (c.reason !== undefined) check.reason = c.reason;
   if (c.incomplete) check.incomplete = true;
+  if (c.thrustRequired_N !== undefined) check.thrustRequired_N = c.thrustRequired_N;
+  if (c.thrustAvailable_N !== undefined) check.thrustAvailable_N = c.thrustAvailable_N;
   return check;
 }
 
@@ -162,22 +169,30 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
       bound: 'min',
       reference: 1,
       subject: name,
-      detail: `${name}: lowest airspeed ${fmt(c.minStallRatio)} × stall speed against ${sf}.`,
+      detail: `Lowest airspeed ${fmt(c.minStallRatio)} × stall speed against ${sf}.`,
     });
   }
   if (c.power !== null) {
-    inputs.push({
+    const p = c.power;
+    const input: CheckInput = {
       id: `power:${i}`,
       label: `${name}: power`,
       legIndex: i,
-      value: c.power.required_W,
-      limit: c.power.available_W,
+      value: p.required_W,
+      limit: p.available_W,
       quantity: 'power',
       bound: 'max',
-      reference: Math.max(Math.abs(c.power.required_W), 1),
+      reference: Math.max(Math.abs(p.required_W), 1),
       subject: name,
-      detail: `${name}: needs ${fmt(c.power.required_W)} W of thrust power where ${fmt(c.power.available_W)} W is available.`,
-    });
+      detail: `Needs ${fmt(p.required_W)} W of thrust power where ${fmt(p.available_W)} W is available.`,
+    };
+    const V = p.tas_m_s ?? 0;
+    if (plan.aircraft.powerplant.type === 'jet' && V > 0) {
+      input.thrustRequired_N = p.required_W / V;
+      input.thrustAvailable_N = p.available_W / V;
+      input.detail = `Needs ${fmt(input.thrustRequired_N)} N of thrust where ${fmt(input.thrustAvailable_N)} N is available.`;
+    }
+    inputs.push(input);
   }
   if (c.climb !== null) {
     inputs.push({
@@ -190,18 +205,21 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
       bound: 'min',
       reference: 1,
       subject: name,
-      detail: `${name}: least rate of climb ${fmt(c.climb.min_m_s)} m/s against ${fmt(c.climb.floor_m_s)} m/s.`,
+      detail: `Least rate of climb ${fmt(c.climb.min_m_s)} m/s against ${fmt(c.climb.floor_m_s)} m/s.`,
     });
   }
 }
 
-/** One plan-level check: the highest altitude of the mission against the aircraft's ceiling. */
+/**
+ * One plan-level check: the highest pressure altitude of the mission against the aircraft's
+ * ceiling (altitudes above mean sea level differ from it by the QNH offset).
+ */
 function ceilingCheck(inputs: CheckInput[], plan: Plan, legs: readonly LegOutcome[]): void {
   let highest = -Infinity;
   let at = -1;
   // The first leg to reach the top names it (a level leg there ties within rounding).
   legs.forEach((o, i) => {
-    const h = o.checks.maxAltitude_m;
+    const h = o.checks.maxPressureAltitude_m ?? o.checks.maxAltitude_m;
     if (h !== null && h > highest + 1e-6) {
       highest = h;
       at = i;
@@ -221,7 +239,7 @@ function ceilingCheck(inputs: CheckInput[], plan: Plan, legs: readonly LegOutcom
     bound: 'max',
     reference: 1000,
     subject: name,
-    detail: `Highest altitude ${fmt(highest)} m (${name}) against a ceiling of ${fmt(ceiling)} m.`,
+    detail: `Highest pressure altitude ${fmt(highest)} m (${name}) against a ceiling of ${fmt(ceiling)} m.`,
   });
 }
 

@@ -12,7 +12,7 @@
  * levels that give one, replaces environment.isaOffset_K (which stays only when no level
  * gives a temperature). Interpolation and extrapolation as core/weather/windsAloft.ts.
  */
-import { atmosphereAt, densityAltitude, type AtmosphereState } from '../atmosphere.ts';
+import { atmosphereAt, densityAltitude, LAYERS, type AtmosphereState } from '../atmosphere.ts';
 import { toTas } from '../airspeed.ts';
 import { InputError } from '../errors.ts';
 import { polarCoefficients, type PolarCoefficients } from '../polar.ts';
@@ -77,6 +77,15 @@ export interface FlightModel {
   readonly aloft: WindProfile | null;
   /** Some leg takes its weather from the table: the reserves are flown in its air too. */
   readonly aloftReserves: boolean;
+  /**
+   * Altitudes (above MSL, ascending) where the air or the engine changes its gradient with
+   * height: the standard atmosphere's layer bases, a propeller's critical altitude, and (in
+   * `aloftBreaks_m`, for the table's air) the levels that carry a temperature. A speed
+   * schedule's dV/dh jumps there, so climbs and descents restart at them (slope.ts,
+   * segment.ts).
+   */
+  readonly breaks_m: readonly number[];
+  readonly aloftBreaks_m: readonly number[];
   /** Last ambient evaluated (legs at one altitude ask for the same air many times). */
   cache: Ambient | null;
   /** The same for the table's air. */
@@ -99,6 +108,8 @@ export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): F
   const carried = pp.type === 'electric' ? pp.battery.mass_kg : pp.fuel.load_kg;
   const levels = plan.environment.windsAloft;
   const aloft = levels ? windProfile(levels, 'environment.windsAloft') : null;
+  const offset = pressureAltitudeFromPressure(plan.environment.qnh_Pa, 'environment.qnh_Pa');
+  const breaks = gradientBreaks(pp, aloft, offset);
   return {
     S_m2: ac.wingArea_m2,
     polar,
@@ -108,10 +119,7 @@ export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): F
     rtol: RELATIVE_TOLERANCE[tolerance],
     consumable,
     isaOffset_K: plan.environment.isaOffset_K,
-    pressureAltitudeOffset_m: pressureAltitudeFromPressure(
-      plan.environment.qnh_Pa,
-      'environment.qnh_Pa',
-    ),
+    pressureAltitudeOffset_m: offset,
     settings: plan.settings,
     CLmaxFlaps: ac.polar.CLmaxFlaps ?? ac.polar.CLmax,
     consumableStart: start,
@@ -120,10 +128,38 @@ export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): F
     aloft,
     aloftReserves:
       aloft !== null && plan.legs.some((l) => 'windSource' in l && l.windSource === 'aloft'),
+    breaks_m: breaks.breaks_m,
+    aloftBreaks_m: breaks.aloftBreaks_m,
     cache: null,
     aloftCache: null,
     densityCache: null,
   };
+}
+
+/** The `breaks_m` and `aloftBreaks_m` of a model (see FlightModel). */
+function gradientBreaks(
+  pp: Powerplant,
+  table: WindProfile | null,
+  offset_m: number,
+): { breaks_m: number[]; aloftBreaks_m: number[] } {
+  const Hp: number[] = [];
+  for (let i = 1; i < LAYERS.length; i++) Hp.push(LAYERS[i]!.H_m);
+  if (pp.type === 'propeller' && pp.criticalAltitude_m > 0) Hp.push(pp.criticalAltitude_m);
+  const breaks_m = toAltitudes(Hp, offset_m);
+  if (table === null || table.isaAltitude_m.length < 2)
+    return { breaks_m, aloftBreaks_m: breaks_m };
+  return { breaks_m, aloftBreaks_m: toAltitudes([...Hp, ...table.isaAltitude_m], offset_m) };
+}
+
+/** Pressure altitudes as altitudes above MSL, ascending, without repeats. */
+function toAltitudes(Hp: number[], offset_m: number): number[] {
+  const sorted = Hp.slice().sort((a, b) => a - b);
+  const out: number[] = [];
+  for (const v of sorted) {
+    const h = v - offset_m;
+    if (out.length === 0 || h !== out[out.length - 1]) out.push(h);
+  }
+  return out;
 }
 
 /**
@@ -134,6 +170,23 @@ export function ambientAt(model: FlightModel, h_m: number, aloft = false): Ambie
   const table = aloft ? model.aloft : null;
   const c = table ? model.aloftCache : model.cache;
   if (c !== null && c.h_m === h_m) return c;
+  const amb = ambientFresh(model, h_m, aloft);
+  if (table) model.aloftCache = amb;
+  else model.cache = amb;
+  return amb;
+}
+
+/** The atmosphere alone at altitude h (no engine, no wind, not cached): for nearby probes. */
+export function airFresh(model: FlightModel, h_m: number, aloft = false): AtmosphereState {
+  const table = aloft ? model.aloft : null;
+  const Hp = h_m + model.pressureAltitudeOffset_m;
+  const dT = table ? aloftIsaOffset(table, Hp, model.isaOffset_K) : model.isaOffset_K;
+  return atmosphereAt(Hp, dT);
+}
+
+/** The same air as `ambientAt`, worked out afresh and not cached (for nearby probes). */
+export function ambientFresh(model: FlightModel, h_m: number, aloft = false): Ambient {
+  const table = aloft ? model.aloft : null;
   const Hp = h_m + model.pressureAltitudeOffset_m;
   const dT = table ? aloftIsaOffset(table, Hp, model.isaOffset_K) : model.isaOffset_K;
   const atm = atmosphereAt(Hp, dT, {
@@ -149,10 +202,7 @@ export function ambientAt(model: FlightModel, h_m: number, aloft = false): Ambie
     windEast_m_s: 0,
     windNorth_m_s: 0,
   };
-  if (table) {
-    aloftWind(table, Hp, amb);
-    model.aloftCache = amb;
-  } else model.cache = amb;
+  if (table) aloftWind(table, Hp, amb);
   return amb;
 }
 

@@ -11,7 +11,9 @@
  *    electric with Peukert exponent n the drain grows as P^n (Traub, J. Aircraft 48(2), 2011),
  *    V/P^n ∝ (CL^m/CD)^n with m = (3n − 1)/(2n), which is (L/D)max at n = 1 and Traub's
  *    best-range speed for a symmetric polar. With an idle floor (fuel burners) the range optimum
- *    holds only where the demand is above idle; the caller checks.
+ *    holds only where the demand is above idle, and the electric one only where the battery
+ *    power is at least the rated discharge power (Peukert applies only there); the caller
+ *    (speeds.ts) checks.
  * The maximum of CL^m/CD (0 < m < 2) for CD = CD0 + k(CL − CLminD)² is the positive root of
  * k(2 − m)·CL² + 2k·CLminD·(m − 1)·CL − m(CD0 + k·CLminD²) = 0 (stationarity:
  * m·CD = CL·dCD/dCL).

@@ -4,44 +4,29 @@
  *
  * Quasi-steady point-mass performance with L = W (small flight-path angles; Anderson,
  * Introduction to Flight, ch. 6): CL = 2W/(ρV²S), D = ½ρV²S·CD(CL).
- * Level flight: thrust power D·V. Climb at a throttle τ: ROC = (τ·P_avail − D·V)/W.
- * Descent at a given rate: thrust power D·V − W·RoD (idle consumption below idle).
- * Glide at idle: sink = V/(L/D). Cruise-climb: V and CL fixed, the density follows the weight,
- * ρ = 2W/(V²·S·CL) (Anderson, Aircraft Performance and Design, ch. 5).
- * Horizontal airspeed √(V² − ḣ²) enters the wind triangle.
+ * Level flight: thrust power D·V. On a slope the energy equation d(h + V²/2g)/dt = (T − D)V/W
+ * holds with the acceleration factor k_a = 1 + (V/g)·dV/dh of the speed schedule
+ * (slope.ts; Anderson, Aircraft Performance and Design, ch. 5): climb at a throttle τ,
+ * ROC = (τ·P_avail − D·V)/(W·k_a); descent at a given rate, thrust power D·V − W·RoD·k_a
+ * (idle consumption below idle; below zero the descent is steeper than an idle glide and
+ * needs drag devices); glide at idle, sink = D·V/(W·k_a) = V/((L/D)·k_a). Paths steeper than
+ * 30° (sin γ = MAX_SIN_GAMMA) are outside the small-angle model and stop the leg.
+ * Cruise-climb: V and CL fixed, the density follows the weight, ρ = 2W/(V²·S·CL) (Anderson,
+ * Aircraft Performance and Design, ch. 5). Horizontal airspeed √(V² − ḣ²) enters the wind
+ * triangle.
  * A path with `aloft` takes the air and, with `aloft.wind`, the wind at each altitude from
  * the winds-aloft table (model.ts, aloft.ts); best range then uses the local wind.
  */
-import type { FixedSpeed } from '../plan/schema.ts';
 import { G0 } from '../units.ts';
-import {
-  altitudeForDensity,
-  ambientAt,
-  fixedSpeedTas,
-  type Ambient,
-  type FlightModel,
-} from './model.ts';
+import { altitudeForDensity, ambientAt, type Ambient, type FlightModel } from './model.ts';
 import { availablePower_W, consumption, idleExcess } from './power.ts';
-import {
-  bestClimbTas,
-  bestEnduranceTas,
-  bestGlideTas,
-  bestRangeTas,
-  dragCoefficientOf,
-  type SpeedChoice,
-  type SpeedContext,
-} from './speeds.ts';
+import { scheduleTas, type ScheduleMemo, type SpeedSchedule } from './schedule.ts';
+import { scheduleSlope } from './slope.ts';
+import { dragCoefficientOf, type SpeedChoice } from './speeds.ts';
 import { alongTrackSpeed } from './wind.ts';
 import { crosswindOf, headwindOf } from './aloft.ts';
 
-export type SpeedSchedule =
-  | { kind: 'fixed'; speed: FixedSpeed }
-  | { kind: 'constantCL'; CL: number }
-  | { kind: 'constantTas'; tas_m_s: number }
-  | { kind: 'bestRange' }
-  | { kind: 'bestEndurance' }
-  | { kind: 'bestClimb' }
-  | { kind: 'bestGlide' };
+export type { ScheduleMemo, SpeedSchedule } from './schedule.ts';
 
 export type VerticalMode =
   | { kind: 'level' }
@@ -51,11 +36,16 @@ export type VerticalMode =
   | { kind: 'descent'; rate_m_s: number }
   | { kind: 'glide' };
 
-/** Weather from the winds-aloft table: its air always, its wind against the course when `wind`. */
+/**
+ * Weather from the winds-aloft table: its air always, its wind against the course when
+ * `wind`; with `allHeadwind` the table's whole wind speed as a headwind (a course not part of
+ * the plan, such as the reserve alternate's: the conservative assumption).
+ */
 export interface AloftPath {
   wind: boolean;
   sinCourse: number;
   cosCourse: number;
+  allHeadwind?: boolean;
 }
 
 export interface FlightPath {
@@ -72,6 +62,15 @@ export interface FlightPath {
 
 /** Steepest flight path the small-angle model is used for (sin γ). */
 export const MAX_SIN_GAMMA = 0.5;
+
+/** Smallest acceleration factor accepted (a schedule slowing down this fast is not flyable). */
+const MIN_ACCEL_FACTOR = 0.05;
+
+/** (L/D)max of the polar, at the best-glide lift coefficient. */
+function maxLiftToDragOf(model: FlightModel): number {
+  const CL = model.optimumCL.glide;
+  return CL / dragCoefficientOf(model.polar, CL);
+}
 
 /** A condition the point model cannot represent; the leg stops with this message. */
 export class FlightLimit extends Error {
@@ -108,6 +107,10 @@ export interface Point {
   speedLimitedBy: SpeedChoice['limitedBy'];
   /** The climb was steeper than MAX_SIN_GAMMA allows at full throttle; less power is used. */
   climbCapped: boolean;
+  /** Acceleration factor 1 + (V/g)·dV/dh of the path (1 level or at constant TAS). */
+  accelFactor: number;
+  /** Descent and glide: the sink rate of an idle glide at this speed, D·V/(W·k_a); else 0. */
+  idleSink_m_s: number;
 }
 
 export function newPoint(model: FlightModel, h_m: number): Point {
@@ -131,76 +134,9 @@ export function newPoint(model: FlightModel, h_m: number): Point {
     stallRatio: 0,
     speedLimitedBy: null,
     climbCapped: false,
+    accelFactor: 1,
+    idleSink_m_s: 0,
   };
-}
-
-/**
- * What a segment remembers between evaluations of its speed schedule: the last answer and
- * the state it was for (an electric aircraft at one altitude keeps its mass, so its best
- * speed is one number for the whole leg), and the warm start of the next search.
- */
-export interface ScheduleMemo {
-  guess_m_s?: number;
-  boundHint?: 'lo' | 'hi';
-  amb?: Ambient;
-  mass_kg?: number;
-  tas_m_s?: number;
-  limitedBy?: SpeedChoice['limitedBy'];
-}
-
-function scheduleTas(
-  model: FlightModel,
-  path: FlightPath,
-  mass_kg: number,
-  amb: Ambient,
-  memo: ScheduleMemo,
-  out: Point,
-): number {
-  // The wind of the point (out.headwind_m_s, out.crosswind_m_s) is set before this runs.
-  const s = path.speed;
-  out.speedLimitedBy = null;
-  switch (s.kind) {
-    case 'fixed':
-      // Depends on the air only.
-      if (memo.amb !== amb || memo.tas_m_s === undefined) {
-        memo.tas_m_s = fixedSpeedTas(s.speed, amb.atm, path.field);
-        memo.amb = amb;
-      }
-      return memo.tas_m_s;
-    case 'constantTas':
-      return s.tas_m_s;
-    case 'constantCL':
-      return Math.sqrt((2 * mass_kg * G0) / (amb.atm.rho_kg_m3 * model.S_m2 * s.CL));
-  }
-  if (memo.amb === amb && memo.mass_kg === mass_kg && memo.tas_m_s !== undefined) {
-    out.speedLimitedBy = memo.limitedBy ?? null;
-    return memo.tas_m_s;
-  }
-  const ctx: SpeedContext = {
-    model,
-    mass_kg,
-    amb,
-    headwind_m_s: out.headwind_m_s,
-    crosswind_m_s: out.crosswind_m_s,
-    guess_m_s: memo.guess_m_s,
-    boundHint: memo.boundHint,
-  };
-  let choice: SpeedChoice;
-  if (s.kind === 'bestRange') choice = bestRangeTas(ctx);
-  else if (s.kind === 'bestEndurance') choice = bestEnduranceTas(ctx);
-  else if (s.kind === 'bestGlide') choice = bestGlideTas(ctx);
-  else choice = bestClimbTas(ctx, path.vertical.kind === 'climb' ? path.vertical.throttle : 1);
-  const at = choice.optimumAt ?? null;
-  if (at === null) {
-    memo.guess_m_s = choice.optimum_m_s;
-    memo.boundHint = undefined;
-  } else memo.boundHint = at;
-  memo.amb = amb;
-  memo.mass_kg = mass_kg;
-  memo.tas_m_s = choice.tas_m_s;
-  memo.limitedBy = choice.limitedBy;
-  out.speedLimitedBy = choice.limitedBy;
-  return choice.tas_m_s;
 }
 
 /** Evaluates the flight condition at (mass, altitude) into `out`. */
@@ -223,7 +159,10 @@ export function evaluatePoint(
     h = altitudeForDensity(model, (2 * W) / (V0 * V0 * S * v.CL), aloft !== undefined);
   }
   const amb = ambientAt(model, h, aloft !== undefined);
-  if (aloft !== undefined && aloft.wind) {
+  if (aloft !== undefined && aloft.allHeadwind === true) {
+    out.headwind_m_s = Math.hypot(amb.windEast_m_s, amb.windNorth_m_s);
+    out.crosswind_m_s = 0;
+  } else if (aloft !== undefined && aloft.wind) {
     const { windEast_m_s: e, windNorth_m_s: n } = amb;
     out.headwind_m_s = headwindOf(e, n, aloft.sinCourse, aloft.cosCourse);
     out.crosswind_m_s = crosswindOf(e, n, aloft.sinCourse, aloft.cosCourse);
@@ -245,13 +184,23 @@ export function evaluatePoint(
   let climb = 0;
   let thrust = D * V;
   let required = D * V;
+  let accel = 1;
   out.climbCapped = false;
+  out.idleSink_m_s = 0;
+  if (v.kind === 'climb' || v.kind === 'descent' || v.kind === 'glide') {
+    accel = 1 + (V / G0) * scheduleSlope(model, path, mass_kg, amb, V, memo, out);
+    if (!(accel > MIN_ACCEL_FACTOR)) {
+      throw new FlightLimit(
+        `the speed schedule changes too fast with altitude at ${fmt(h)} m (acceleration factor ${fmt(accel)})`,
+      );
+    }
+  }
   if (v.kind === 'climb') {
     thrust = v.throttle * avail;
-    climb = (thrust - D * V) / W;
+    climb = (thrust - D * V) / (W * accel);
     if (climb > MAX_SIN_GAMMA * V) {
       climb = MAX_SIN_GAMMA * V;
-      thrust = D * V + W * climb;
+      thrust = D * V + W * climb * accel;
       out.climbCapped = true;
     }
     required = thrust;
@@ -262,12 +211,20 @@ export function evaluatePoint(
       );
     }
     climb = -v.rate_m_s;
-    required = D * V - W * v.rate_m_s;
+    required = D * V - W * v.rate_m_s * accel;
     thrust = required;
+    out.idleSink_m_s = (D * V) / (W * accel);
   } else if (v.kind === 'glide') {
-    climb = -(D * V) / W;
+    const sink = (D * V) / (W * accel);
+    if (sink >= MAX_SIN_GAMMA * V) {
+      throw new FlightLimit(
+        `a glide at ${fmt(V)} m/s would be steeper than 30° (L/D ${fmt(CL / CD)} there, (L/D)max ${fmt(maxLiftToDragOf(model))}; a glide needs an L/D above about ${fmt(1 / MAX_SIN_GAMMA)})`,
+      );
+    }
+    climb = -sink;
     required = 0;
     thrust = 0;
+    out.idleSink_m_s = sink;
   }
   const horizontal = Math.sqrt(V * V - climb * climb);
   out.h_m = h;
@@ -284,6 +241,7 @@ export function evaluatePoint(
   out.rate = consumption(model.power, amb.engineMax, thrust, V);
   out.idleExcess = idleExcess(model.power, amb.engineMax, thrust, V);
   out.climb_m_s = climb;
+  out.accelFactor = accel;
   out.stallRatio = Math.sqrt(model.polar.CLmax / CL);
   return out;
 }

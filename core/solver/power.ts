@@ -103,7 +103,8 @@ export function availablePower_W(c: PowerConstants, engineMax: number, V_m_s: nu
 
 /**
  * Consumption for a thrust power (≤ 0 means idle): fuel kg/s (jet TSFC·max(T, idle·T_max);
- * propeller BSFC·max(P/η, idle·P_max)) or battery drain W (electric, Peukert applied).
+ * propeller BSFC·max(P/η, idle·P_max)) or battery drain W (electric, Peukert applied at or
+ * above the rated discharge power).
  */
 export function consumption(
   c: PowerConstants,
@@ -118,9 +119,11 @@ export function consumption(
     case 'propeller':
       return c.sfc * Math.max(demand / c.propEfficiency, c.idleFraction * engineMax);
     case 'electric': {
+      // Peukert only at or above the rated discharge power (core/propulsion/electric.ts).
       const P = demand / c.chainEfficiency;
-      if (P === 0 || c.peukertExponent === 1) return P;
-      return P * Math.pow(P * c.ratedTimeOverEnergy_s_J, c.peukertExponent - 1);
+      if (c.peukertExponent === 1) return P;
+      const x = P * c.ratedTimeOverEnergy_s_J;
+      return x > 1 ? P * Math.pow(x, c.peukertExponent - 1) : P;
     }
   }
 }

@@ -4,8 +4,8 @@
  * (cruise by distance), consumable left (cruise by fuel or energy, loiter until reserve),
  * altitude (climb, descent) or time (loiter by time).
  *
- * State: time, ground distance, air distance, altitude, mass, consumable left (fuel kg or
- * usable battery J). Fuel burners lose the fuel's mass; an electric aircraft keeps its mass.
+ * State: time, ground distance, horizontal air distance, altitude, mass, consumable left
+ * (fuel kg or usable battery J) and the air path length ∫V dt (the mean TAS of a leg). Fuel burners lose the fuel's mass; an electric aircraft keeps its mass.
  * Limits (stall margin, power, climb rate, consumable, wind) are watched as an event: the leg
  * stops where the first one is broken, located on the dense output.
  */
@@ -15,6 +15,7 @@ import { integrate, OdeError, type OdeStep } from './ode.ts';
 import { evaluatePoint, FlightLimit, newPoint, type Point, type ScheduleMemo } from './point.ts';
 import {
   A,
+  altitudeStops,
   climbFloor,
   emptySeries,
   fromVector,
@@ -22,8 +23,10 @@ import {
   indepIndex,
   limitMargin,
   M,
+  P,
   pushSample,
   Q,
+  STATE_SIZE,
   T,
   toVector,
   X,
@@ -79,11 +82,11 @@ class SegmentFlight {
    * step is at the step's end, so the event and the statistics there cost nothing.
    */
   private readonly point: Point;
-  private readonly seenAt = new Float64Array(6).fill(NaN);
+  private readonly seenAt = new Float64Array(STATE_SIZE).fill(NaN);
   private readonly floorHalf: number;
   /** The end of the last accepted step. */
   private readonly last: Float64Array;
-  private readonly scratch = new Float64Array(6);
+  private readonly scratch = new Float64Array(STATE_SIZE);
   private steps = 0;
   /** Chart samples: how many, and the next one due. */
   private readonly n: number;
@@ -129,13 +132,23 @@ class SegmentFlight {
       this.kinkSign = p0.idleExcess >= 0 ? 1 : -1;
       let x = this.s0;
       let y = y0;
+      // Over altitude, also stop and start afresh where the air's gradient jumps (the
+      // acceleration factor of a climb or descent jumps there; slope.ts).
+      const stops = altitudeStops(this.model, spec, this.s0);
+      let stop = 0;
       for (let restarts = 0; ; restarts++) {
-        const res = integrate(this.rhs, x, y, spec.to, {
+        const to = stops[stop] ?? spec.to;
+        if (stops.length > 0) {
+          // At a break the schedule's dV/dh is taken on this piece's side (slope.ts).
+          this.memo.pieceEnd_m = to;
+          this.seenAt.fill(NaN);
+        }
+        const res = integrate(this.rhs, x, y, to, {
           rtol: this.model.rtol,
           atol: 1e-12,
           // The legs are smooth and nearly linear in their independent variable: the first
           // trial step is the whole rest of the leg; the error control shrinks it as needed.
-          initialStep: Math.abs(spec.to - x),
+          initialStep: Math.abs(to - x),
           maxSteps: 20_000,
           event: this.event,
           onStep: this.onStep,
@@ -144,6 +157,12 @@ class SegmentFlight {
         // only carries rounding).
         res.y[this.ix] = res.x;
         const p1 = this.observe(res.y);
+        if (!res.stoppedByEvent && to !== spec.to) {
+          stop++;
+          x = res.x;
+          y = res.y;
+          continue;
+        }
         if (!res.stoppedByEvent) return this.finish(null, res.y, p1);
         const margin = this.worstMargin(res.y, p1);
         if (this.kinkSign !== 0 && this.kinkMargin(p1) < margin) {
@@ -206,7 +225,8 @@ class SegmentFlight {
       y[T] === seen[T] &&
       y[X] === seen[X] &&
       y[A] === seen[A] &&
-      y[Q] === seen[Q]
+      y[Q] === seen[Q] &&
+      y[P] === seen[P]
     ) {
       return this.point;
     }
@@ -252,6 +272,7 @@ class SegmentFlight {
     dy[H] = spec.path.vertical.kind === 'cruiseClimb' ? 0 : p.climb_m_s / per;
     dy[M] = fuel ? -p.rate / per : 0;
     dy[Q] = -p.rate / per;
+    dy[P] = p.tas_m_s / per;
   }
 
   /** The least limit margin at y (Infinity with no limits); its kind in `worstKind`. */

@@ -20,6 +20,11 @@ export interface MissionState {
   mass_kg: number;
   /** Fuel kg or usable battery energy J left. */
   left: number;
+  /**
+   * Air path length ∫V dt (true airspeed along the flight path, climbs and descents
+   * included); 0 when absent. `air_m` is the horizontal part, ∫√(V² − ḣ²) dt.
+   */
+  path_m?: number;
 }
 
 export interface SegmentSpec {
@@ -53,11 +58,14 @@ export const A = 2;
 export const H = 3;
 export const M = 4;
 export const Q = 5;
+export const P = 6;
+/** Length of the state vector. */
+export const STATE_SIZE = 7;
 /** A limit counts as broken only beyond this relative margin (rounding at a limited speed). */
 export const LIMIT_TOLERANCE = 1e-9;
 
 export function toVector(s: MissionState): Float64Array {
-  return Float64Array.of(s.t_s, s.x_m, s.air_m, s.h_m, s.mass_kg, s.left);
+  return Float64Array.of(s.t_s, s.x_m, s.air_m, s.h_m, s.mass_kg, s.left, s.path_m ?? 0);
 }
 
 export function indepIndex(i: Independent): number {
@@ -116,9 +124,30 @@ export function pushSample(
 }
 
 export function fromVector(y: Float64Array, h_m: number): MissionState {
-  return { t_s: y[T]!, x_m: y[X]!, air_m: y[A]!, h_m, mass_kg: y[M]!, left: y[Q]! };
+  return {
+    t_s: y[T]!,
+    x_m: y[X]!,
+    air_m: y[A]!,
+    h_m,
+    mass_kg: y[M]!,
+    left: y[Q]!,
+    path_m: y[P]!,
+  };
 }
 
 export function emptySeries(): LegSeries {
   return { t_s: [], x_m: [], h_m: [], mass_kg: [], fuel_kg: [], energy_J: [], tas_m_s: [] };
+}
+
+/**
+ * Where a climb or descent stops and starts afresh: the model's gradient breaks strictly
+ * between its start s0 and its end, in the order flown (none for other segments).
+ */
+export function altitudeStops(model: FlightModel, spec: SegmentSpec, s0: number): number[] {
+  if (spec.indep !== 'h') return [];
+  const breaks = spec.path.aloft !== undefined ? model.aloftBreaks_m : model.breaks_m;
+  const lo = Math.min(s0, spec.to);
+  const hi = Math.max(s0, spec.to);
+  const inside = breaks.filter((b) => b > lo && b < hi);
+  return spec.to >= s0 ? inside : inside.reverse();
 }

@@ -1,7 +1,8 @@
 /**
  * What a segment remembers of its flight for the leg result and the checks: spans of CL and
  * L/D, the least stall margin, the largest and the tightest power, the least rate of climb,
- * the highest altitude, and where a best-speed schedule had to leave its optimum.
+ * the highest altitude (and pressure altitude), where a best-speed schedule had to leave its
+ * optimum, and the point where a descent is steepest beyond an idle glide.
  */
 import type { Point } from './point.ts';
 
@@ -18,8 +19,23 @@ export interface SegmentStats {
   worstPowerMargin: number;
   worstPowerRequired_W: number;
   worstPowerAvailable_W: number;
+  /** TAS at the point of least power margin (a jet's thrust is power / TAS). */
+  worstPowerTas_m_s: number;
   minClimb_m_s: number;
   maxAltitude_m: number;
+  maxPressureAltitude_m: number;
+  /**
+   * A descent steeper than an idle glide (thrust power required below 0) at its worst point:
+   * the descent rate, the idle-glide sink at that speed, the speed, altitude and the power
+   * the drag devices would have to dissipate.
+   */
+  steepDescent: {
+    rate_m_s: number;
+    idleSink_m_s: number;
+    tas_m_s: number;
+    h_m: number;
+    dissipate_W: number;
+  } | null;
   startTas_m_s: number;
   /** First point where a best-speed schedule was moved off its optimum, and why. */
   limitedSpeed: { tas_m_s: number; by: 'stall' | 'power' | 'mach' } | null;
@@ -38,8 +54,11 @@ export function emptyStats(): SegmentStats {
     worstPowerMargin: Infinity,
     worstPowerRequired_W: 0,
     worstPowerAvailable_W: 0,
+    worstPowerTas_m_s: 0,
     minClimb_m_s: Infinity,
     maxAltitude_m: -Infinity,
+    maxPressureAltitude_m: -Infinity,
+    steepDescent: null,
     startTas_m_s: 0,
     limitedSpeed: null,
     climbCapped: false,
@@ -62,9 +81,24 @@ export function record(stats: SegmentStats, p: Point): void {
     stats.worstPowerMargin = margin;
     stats.worstPowerRequired_W = p.powerRequired_W;
     stats.worstPowerAvailable_W = p.powerAvailable_W;
+    stats.worstPowerTas_m_s = p.tas_m_s;
   }
   stats.minClimb_m_s = Math.min(stats.minClimb_m_s, p.climb_m_s);
   stats.maxAltitude_m = Math.max(stats.maxAltitude_m, p.h_m);
+  stats.maxPressureAltitude_m = Math.max(stats.maxPressureAltitude_m, p.amb.pressureAltitude_m);
+  if (
+    p.idleSink_m_s > 0 &&
+    p.thrustPower_W < 0 &&
+    (stats.steepDescent === null || -p.thrustPower_W > stats.steepDescent.dissipate_W)
+  ) {
+    stats.steepDescent = {
+      rate_m_s: -p.climb_m_s,
+      idleSink_m_s: p.idleSink_m_s,
+      tas_m_s: p.tas_m_s,
+      h_m: p.h_m,
+      dissipate_W: -p.thrustPower_W,
+    };
+  }
   if (stats.limitedSpeed === null && p.speedLimitedBy !== null) {
     stats.limitedSpeed = { tas_m_s: p.tas_m_s, by: p.speedLimitedBy };
   }

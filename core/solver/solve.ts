@@ -12,9 +12,9 @@
  */
 import { InputError } from '../errors.ts';
 import type { Leg, LoiterLeg, Plan } from '../plan/schema.ts';
-import { consumableOf } from '../propulsion/index.ts';
 import { missionChecks, verdictOf } from './checks.ts';
 import { fieldChecks } from './fieldChecks.ts';
+import { crashedResult } from './crashed.ts';
 import { guardResult } from './guard.ts';
 import { baseResult, legName, refusedLeg, type LegContext } from './legs/common.ts';
 import { flyLeg, type LegOutcome } from './legs/index.ts';
@@ -74,6 +74,12 @@ interface Flown {
   end: MissionState;
   failedAt: number | null;
   warnings: string[];
+  /** Consumption of the take-off and landing allowance legs (those before `from` included). */
+  allowances: number;
+}
+
+function isAllowance(leg: Leg): boolean {
+  return leg.kind === 'takeoff' || leg.kind === 'landing';
 }
 
 /** What every flight of the legs shares: the model, the plan and the legs as flown. */
@@ -114,7 +120,8 @@ function flyOne(
 
 /**
  * Flies legs[from..] from `state`. In a trial (samples 0) every "until reserve" loiter is
- * flown for nothing: the loiter being searched for takes all the spare.
+ * flown for nothing: the loiter being searched for takes all the spare. `allowances`: what
+ * the allowance legs before `from` used.
  */
 function flyLegs(
   m: Mission,
@@ -122,17 +129,19 @@ function flyLegs(
   state: MissionState,
   samples: number,
   along_m: number,
+  allowances = 0,
 ): Flown {
   const outcomes: LegOutcome[] = [];
   const warnings: string[] = [];
   let s = state;
   let along = along_m;
+  let fixed = allowances;
   for (let i = from; i < m.legs.length; i++) {
     const leg = m.legs[i]!;
     const ctx: LegContext = { model: m.model, index: i, samples };
     let consume = 0;
     if (isUntilReserve(leg) && samples > 0) {
-      const found = searchUntilReserve(m, i, s, along);
+      const found = searchUntilReserve(m, i, s, along, fixed);
       consume = found.consume;
       if (found.status === 'none') {
         warnings.push(
@@ -144,21 +153,33 @@ function flyLegs(
     outcomes.push(o);
     warnings.push(...o.warnings);
     if (m.route !== null) along = alongAfter(m.route, i, along, o.result.groundDistance_m);
+    if (isAllowance(leg)) fixed += s.left - o.end.left;
     s = o.end;
-    if (o.failed) return { outcomes, end: s, failedAt: i, warnings };
+    if (o.failed) return { outcomes, end: s, failedAt: i, warnings, allowances: fixed };
   }
-  return { outcomes, end: s, failedAt: null, warnings };
+  return { outcomes, end: s, failedAt: null, warnings, allowances: fixed };
 }
 
-function searchUntilReserve(m: Mission, index: number, start: MissionState, along_m: number) {
+/** Consumption the contingency applies to: the trip without its allowance legs. */
+function contingencyBase(model: FlightModel, flown: Flown): number {
+  return model.consumableStart - flown.end.left - flown.allowances;
+}
+
+function searchUntilReserve(
+  m: Mission,
+  index: number,
+  start: MissionState,
+  along_m: number,
+  allowances: number,
+) {
   const { model, plan } = m;
   const surplus = (c: number): number | null => {
     const loiter = flyOne(m, { model, index, samples: 0 }, start, c, along_m);
     if (loiter.failed) return null;
     const along = m.route ? alongAfter(m.route, index, along_m, loiter.result.groundDistance_m) : 0;
-    const rest = flyLegs(m, index + 1, loiter.end, 0, along);
+    const rest = flyLegs(m, index + 1, loiter.end, 0, along, allowances);
     if (rest.failedAt !== null) return null;
-    const trip = model.consumableStart - rest.end.left;
+    const trip = contingencyBase(model, rest);
     return rest.end.left - requiredReserves(model, plan.reserves, rest.end, trip).required.total;
   };
   const scale = Math.max(model.consumableStart, 1e-300);
@@ -180,6 +201,7 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
     t_s: 0,
     x_m: 0,
     air_m: 0,
+    path_m: 0,
     h_m: env.departureElevation_m,
     mass_kg: model.takeoffMass_kg,
     left: model.consumableStart,
@@ -194,7 +216,7 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
     );
   }
   const trip = model.consumableStart - end.left;
-  const reserve = requiredReserves(model, plan.reserves, end, trip);
+  const reserve = requiredReserves(model, plan.reserves, end, contingencyBase(model, flown));
   const total = reserve.required.total;
   const warnings = [...(route?.warnings ?? []), ...flown.warnings, ...reserve.warnings];
   if (completed && Math.abs(end.h_m - env.arrivalElevation_m) > 1) {
@@ -245,61 +267,5 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
     checks,
     verdict: verdictOf(checks, !completed),
     warnings,
-  };
-}
-
-/** A result for a plan the solver could not even start on (an internal error). */
-function crashedResult(plan: Plan, e: unknown): PlanResult {
-  const message = `internal: the solver stopped (${e instanceof Error ? e.message : String(e)})`;
-  let consumable: PlanResult['consumable'] = 'fuel';
-  try {
-    consumable = consumableOf(plan.aircraft.powerplant);
-  } catch {
-    // keep 'fuel'
-  }
-  const zero = { t_s: 0, x_m: 0, h_m: 0, mass_kg: 0, fuel_kg: 0, energy_J: 0 };
-  const legs: LegResult[] = (plan.legs ?? []).map((leg, index) => ({
-    index,
-    id: leg.id,
-    kind: leg.kind,
-    label: leg.label ?? '',
-    status: index === 0 ? 'failed' : 'notReached',
-    error: index === 0 ? message : null,
-    start: { ...zero },
-    end: { ...zero },
-    time_s: 0,
-    groundDistance_m: 0,
-    airDistance_m: 0,
-    fuelUsed_kg: 0,
-    energyUsed_J: 0,
-    meanTas_m_s: 0,
-    meanGroundSpeed_m_s: 0,
-    CL: { min: 0, max: 0 },
-    LD: { min: 0, max: 0 },
-    minStallRatio: 0,
-    powerRequired_W: 0,
-    powerAvailable_W: 0,
-    headwind_m_s: 0,
-    crosswind_m_s: 0,
-    heading_deg: 0,
-    steps: 0,
-    series: { t_s: [], x_m: [], h_m: [], mass_kg: [], fuel_kg: [], energy_J: [], tas_m_s: [] },
-  }));
-  return {
-    consumable,
-    legs,
-    completed: false,
-    failure: { legIndex: 0, message },
-    takeoffMass_kg: 0,
-    totals: { time_s: 0, groundDistance_m: 0, airDistance_m: 0, fuelUsed_kg: 0, energyUsed_J: 0 },
-    landing: { remaining: 0, fractionOfStart: 0, soc: 0 },
-    reserve: {
-      required: { contingency: 0, alternate: 0, hold: 0, floor: 0, total: 0 },
-      kept: false,
-      margin: 0,
-    },
-    checks: [],
-    verdict: 'fails',
-    warnings: [],
   };
 }

@@ -116,14 +116,46 @@ export function bestRangeTas(ctx: SpeedContext): SpeedChoice {
   const hw = ctx.headwind_m_s;
   const cw = ctx.crosswind_m_s;
   if (hw === 0 && cw === 0) {
-    const choice = atLiftCoefficient(ctx, ctx.model.optimumCL.range);
-    if (choice.limitedBy !== null || aboveIdle(ctx, choice.tas_m_s)) return choice;
+    const power = ctx.model.power;
+    if (power.type === 'electric' && power.peukertExponent !== 1) {
+      const choice = electricStillAirRange(ctx);
+      if (choice !== null) return choice;
+    } else {
+      const choice = atLiftCoefficient(ctx, ctx.model.optimumCL.range);
+      if (choice.limitedBy !== null || aboveIdle(ctx, choice.tas_m_s)) return choice;
+    }
   }
   return choose(
     ctx,
     (V) => alongTrackSpeed(V, hw, cw) / rateAt(ctx, levelDrag_N(ctx, V) * V, V),
     true,
   );
+}
+
+/**
+ * Electric best range in still air with the Peukert correction, which applies only at or
+ * above the rated discharge power (core/propulsion/electric.ts): the drain is P·max(1, x^(n−1))
+ * with x = P·Rt/E, never below the Peukert drain P·x^(n−1) nor below P. So Traub's optimum
+ * holds where it draws at least the rated power, the (L/D)max optimum where that draws at
+ * most the rated power; otherwise the optimum is the speed between them that draws exactly
+ * the rated power (both objectives fall away from it; the power rises with speed there, both
+ * speeds being above the minimum-power speed). Null only if a limit moved one of the speeds
+ * (the caller then searches).
+ */
+function electricStillAirRange(ctx: SpeedContext): SpeedChoice | null {
+  const peukert = atLiftCoefficient(ctx, ctx.model.optimumCL.range);
+  if (ratedPowerRatio(ctx, peukert.tas_m_s) >= 1) return peukert;
+  const plain = atLiftCoefficient(ctx, ctx.model.optimumCL.glide);
+  if (ratedPowerRatio(ctx, plain.tas_m_s) <= 1) return plain;
+  if (peukert.limitedBy !== null || plain.limitedBy !== null) return null;
+  const V = rootBracketed((v) => ratedPowerRatio(ctx, v) - 1, peukert.tas_m_s, plain.tas_m_s);
+  return { tas_m_s: V, optimum_m_s: V, limitedBy: null, optimumAt: null };
+}
+
+/** Battery power in level flight at V over the rated discharge power E/Rt. */
+function ratedPowerRatio(ctx: SpeedContext, V: number): number {
+  const c = ctx.model.power;
+  return ((levelDrag_N(ctx, V) * V) / c.chainEfficiency) * c.ratedTimeOverEnergy_s_J;
 }
 
 /** The demand at V is above the idle floor (so consumption follows it). */

@@ -54,6 +54,7 @@ export interface LegResult {
   airDistance_m: number;
   fuelUsed_kg: number;
   energyUsed_J: number;
+  /** Mean true airspeed along the flight path: ∫V dt / time (airDistance_m is horizontal). */
   meanTas_m_s: number;
   meanGroundSpeed_m_s: number;
   /** Lift coefficient and lift-to-drag ratio over the leg (0..0 for allowance legs). */
@@ -117,6 +118,12 @@ export interface Check {
   reason?: string;
   /** The reserve check of a mission that was not completed: it fails whatever the numbers say. */
   incomplete?: boolean;
+  /**
+   * Jet power checks: the same point as thrust (N), required and available (value and limit
+   * stay thrust power, W); a jet's thrust is what its pilot and engineer read.
+   */
+  thrustRequired_N?: number;
+  thrustAvailable_N?: number;
 }
 
 export interface ReserveBreakdown {

@@ -2,8 +2,8 @@
  * Spreads (standard deviations) of the uncertain plan inputs, their defaults, and how one
  * random draw turns a plan into a perturbed copy.
  *
- * Each input is normal around the plan's value: wind speed and direction per leg in absolute
- * terms, CD0, propeller/drivetrain efficiency, TSFC/BSFC and battery capacity relative to the
+ * Each input is normal around the plan's value: wind speed and direction per leg, and per
+ * level of the winds-aloft table when the plan has one (the same spreads), in absolute terms, CD0, propeller/drivetrain efficiency, TSFC/BSFC and battery capacity relative to the
  * plan's value, payload in kg. A draw that falls outside the plan schema's range (negative wind
  * or payload, efficiency above its bound, ...) is censored at the bound, so the perturbed plan
  * is still a valid plan; the wind direction wraps round the compass.
@@ -109,10 +109,36 @@ function wrapDegrees(d: number): number {
 
 /**
  * Number of normal deviates one sample uses: two per leg (speed, direction; drawn for every
- * leg so the stream stays aligned between plans with the same legs) and five for the aircraft.
+ * leg so the stream stays aligned between plans with the same legs), five for the aircraft,
+ * then two per level of the winds-aloft table (after the others, so a plan without a table
+ * draws exactly what it drew before tables were perturbed).
  */
 export function drawsPerSample(plan: Plan): number {
-  return 2 * plan.legs.length + 5;
+  return 2 * plan.legs.length + 5 + 2 * (plan.environment.windsAloft?.length ?? 0);
+}
+
+/** Schema bound of a winds-aloft level's speed (core/plan/schema.ts). */
+const ALOFT_SPEED_MAX_M_S = 150;
+
+/** The winds-aloft table with each level's speed and direction drawn (same spreads as legs). */
+function perturbAloft(plan: Plan, s: ReserveSpreads, rng: NormalSource, draws: Draw[]): Plan {
+  const levels = plan.environment.windsAloft;
+  if (levels === undefined) return plan;
+  const windsAloft = levels.map((level, j) => {
+    const zSpeed = rng.normal();
+    const zDir = rng.normal();
+    const out = { ...level };
+    if (s.windSpeed_m_s > 0) {
+      out.speed_m_s = censor(level.speed_m_s + s.windSpeed_m_s * zSpeed, 0, ALOFT_SPEED_MAX_M_S);
+      draws.push({ path: `environment.windsAloft.${j}.speed_m_s`, value: out.speed_m_s });
+    }
+    if (s.windDirection_deg > 0) {
+      out.from_deg = wrapDegrees(level.from_deg + s.windDirection_deg * zDir);
+      draws.push({ path: `environment.windsAloft.${j}.from_deg`, value: out.from_deg });
+    }
+    return out;
+  });
+  return { ...plan, environment: { ...plan.environment, windsAloft } };
 }
 
 /**
@@ -163,7 +189,8 @@ export function perturbPlan(
     draws.push({ path: 'aircraft.mass.payload_kg', value: mass.payload_kg });
   }
   const powerplant = perturbPowerplant(ac.powerplant, s, { zEff, zSfc, zBatt }, draws);
-  return { plan: { ...plan, aircraft: { ...ac, polar, mass, powerplant }, legs }, draws };
+  const perturbed = perturbAloft(plan, s, rng, draws);
+  return { plan: { ...perturbed, aircraft: { ...ac, polar, mass, powerplant }, legs }, draws };
 }
 
 function perturbPowerplant(

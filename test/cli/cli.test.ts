@@ -270,6 +270,8 @@ describe('legwise solve --monte-carlo', () => {
     expect(code).toBe(0);
     const kept = Math.floor(100 * (1 - mc.probabilityReserveNotKept));
     expect(out).toContain(`In ${kept} of 100 simulated flights the reserve is kept.`);
+    // Said once: no second count of the same thing in samples.
+    expect(out).not.toMatch(/not kept in \d+ of/);
     expect(out).toContain('200 simulated flights (random seed 7)');
     expect(out).toContain(`p50 ${formatQuantity(mc.margin!.p50, 'energy', 'si')}`);
     expect(out.trimEnd().endsWith(CAUTION)).toBe(true);
@@ -294,8 +296,53 @@ describe('legwise solve --monte-carlo', () => {
 describe('check sentences in the chosen units', () => {
   it('aviation units: power in hp and altitudes in ft, no raw watts', () => {
     const { out } = run(['solve', examplePath('piston-tourer.json'), '--units', 'aviation']);
-    expect(out).toMatch(/needs \d+(\.\d+)? hp of thrust power, \d+(\.\d+)? hp available\./);
-    expect(out).toMatch(/Highest altitude \d+ ft .* against a ceiling of \d+ ft\./);
+    // Wording: the sentence no longer repeats the leg (its label does); the ceiling is
+    // compared with the pressure altitude.
+    expect(out).toMatch(/Needs \d+(\.\d+)? hp of thrust power, \d+(\.\d+)? hp available\./);
+    expect(out).toMatch(/Highest pressure altitude \d+ ft .* against a ceiling of \d+ ft\./);
     expect(out).not.toMatch(/\d W of thrust power/);
+    const row = out.split('\n').find((l) => l.includes('“Cruise to the coast” (cruise): power'))!;
+    expect(row.split('Cruise to the coast')).toHaveLength(2); // the leg named once in the row
+  });
+
+  it('a jet power check reads as thrust, in lbf and kN', () => {
+    const aviation = run(['solve', examplePath('light-jet.json'), '--units', 'aviation']).out;
+    expect(aviation).toMatch(/\d+ lbf \/ \d+ lbf .*Needs \d+ lbf of thrust, \d+ lbf available\./);
+    expect(aviation).not.toMatch(/hp of thrust power/);
+    const si = run(['solve', examplePath('light-jet.json')]).out;
+    expect(si).toMatch(/Needs \d+\.\d kN of thrust, \d+\.\d kN available\./);
+  });
+
+  it('a battery landing: share of usable energy and the pack against nominal', () => {
+    const result = solved('survey-uav-electric.json');
+    const { out } = run(['solve', examplePath('survey-uav-electric.json')]);
+    // Pack share = 1 − usableFraction·(1 − soc): the unusable share is counted as still in the
+    // pack (definition; the example file gives usableFraction).
+    const plan = parsePlanText(readFileSync(examplePath('survey-uav-electric.json'), 'utf8'));
+    if (!plan.ok || plan.plan.aircraft.powerplant.type !== 'electric') throw new Error('plan');
+    const u = plan.plan.aircraft.powerplant.battery.usableFraction;
+    const soc = formatQuantity(result.landing.soc, 'ratio', 'si');
+    const pack = formatQuantity(1 - u * (1 - result.landing.soc), 'ratio', 'si');
+    expect(out).toContain(`(${soc} of usable energy; pack at ${pack} of nominal)`);
+    expect(out).not.toContain('state of charge');
+  });
+});
+
+describe('tune wording', () => {
+  it('says when the best altitude is the ceiling', () => {
+    const data = demoJson('light-jet.json');
+    setAt(data, 'aircraft.ceiling_m', 9000);
+    const { out } = run(['tune', 'j.json'], { 'j.json': JSON.stringify(data) });
+    expect(out).toMatch(/\n {2}9000 m, limited by the ceiling: \d+ kg left on landing/);
+  });
+
+  it('says where the sweep starts when the plan as given does better', () => {
+    const plan = parsePlanText(readFileSync(examplePath('survey-uav-electric.json'), 'utf8'));
+    if (!plan.ok) throw new Error('plan');
+    const start = plan.plan.environment.departureElevation_m + 300; // MIN_HEIGHT_ABOVE_DEPARTURE_M
+    const { out } = run(['tune', examplePath('survey-uav-electric.json')]);
+    expect(out).toContain(
+      `the plan as given does better — the sweep starts 300 m above the departure field, at ${formatQuantity(start, 'altitude', 'si')}`,
+    );
   });
 });

@@ -124,18 +124,31 @@ describe('Traub (2011), J. Aircraft 48(2): computed small-UAV example (REFERENCE
     expect(rel(VR, minDragSpeed(c, W, rho, S))).toBeLessThan(1e-12);
   });
 
-  it('agrees with the Peukert drain rate of the battery model: t = E/drain(P/η)', () => {
-    // Same Traub 2011 law through the propulsion module (energy form, see core/propulsion/electric.ts).
+  it('agrees with the Peukert drain rate of the battery model at or above its rated power: t = E/drain(P/η)', () => {
+    // Same Traub 2011 law through the propulsion module (energy form, see
+    // core/propulsion/electric.ts), which applies it only at or above the rated discharge power
+    // E/Rt: here 20 W/0.6 = 33.3 W against E/Rt = 266 400 J / 10 h = 7.4 W.
     for (const n of [1, 1.15, 1.4]) {
       const battery = {
         energy_J,
         mass_kg: 0.5,
         usableFraction: 1,
         peukertExponent: n,
-        ratedDischargeTime_s: HOUR,
+        ratedDischargeTime_s: 10 * HOUR,
       };
-      const t = enduranceElectricTraub({ ...base, powerRequired_W: 20, peukertExponent: n });
+      const t = enduranceElectricTraub({
+        ...base,
+        powerRequired_W: 20,
+        peukertExponent: n,
+        ratedTime_s: 10 * HOUR,
+      });
       expect(rel(t, energy_J / peukertDrainRate_W(battery, 20 / 0.6))).toBeLessThan(1e-12);
+      // Below the rated power the battery model credits no more than the rated energy:
+      // t = η·E/P, where this closed form would give more for n > 1.
+      const slow = { ...battery, ratedDischargeTime_s: HOUR };
+      expect(
+        rel(energy_J / peukertDrainRate_W(slow, 20 / 0.6), (0.6 * energy_J) / 20),
+      ).toBeLessThan(1e-14);
     }
   });
 });

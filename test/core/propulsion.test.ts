@@ -175,6 +175,16 @@ describe('electric drivetrain and Peukert (Traub 2011)', () => {
     expect(rel(peukertDrainRate_W(battery, P), P * Math.pow(2, 0.2))).toBeLessThan(1e-14);
     expect(peukertDrainRate_W(battery, 0)).toBe(0);
   });
+
+  it('below the rated discharge power the drain is P: no credit beyond the rated energy', () => {
+    // Traub 2011 fits the correction at and above the rated current (from memory); below it the
+    // formula would drain less than P, i.e. deliver more than the rated energy.
+    const ratedPower = battery.energy_J / battery.ratedDischargeTime_s;
+    for (const f of [0.01, 0.5, 0.999]) {
+      expect(peukertDrainRate_W(battery, f * ratedPower)).toBe(f * ratedPower);
+    }
+    expect(peukertDrainRate_W(battery, 1.001 * ratedPower)).toBeGreaterThan(1.001 * ratedPower);
+  });
 });
 
 describe('one interface for the solver', () => {

@@ -1,14 +1,19 @@
 /**
  * Take-off and landing allowances: a fixed amount of fuel or battery energy, a fraction of
- * the current mass (fuel burners), or a time at maximum power or thrust at the current
- * altitude. For the time allowance the consumption at the maximum setting is constant (the
- * maximum thrust or power depends on the air only), so the amount is rate × time; the jet's
- * thrust power is taken at 1.2 × V_stall with CLmaxFlaps when given (common practice for the
- * take-off safety speed).
+ * the current mass (fuel burners), or a time at the current altitude: for take-off at maximum
+ * power or thrust (the jet's thrust power taken at 1.2 × V_stall with CLmaxFlaps when given,
+ * common practice for the take-off safety speed); for landing at approach power, the
+ * level-flight power required D·V at 1.3 × V_stall with CLmaxFlaps when given (common practice
+ * for the approach speed; the clean polar's drag at that CL, so flap and gear drag are not in
+ * it), never below the engine's idle consumption. The consumption is constant over the time
+ * (the air and, for the allowance, the mass are those at its start), so the amount is
+ * rate × time.
  */
 import type { LandingLeg, TakeoffLeg } from '../../plan/schema.ts';
 import { availableThrustPower_W, consumptionRate } from '../../propulsion/index.ts';
-import { ambientAt, stallTas } from '../model.ts';
+import { G0 } from '../../units.ts';
+import { ambientAt, stallTas, type FlightModel } from '../model.ts';
+import { dragCoefficientOf } from '../speeds.ts';
 import { fmt } from '../point.ts';
 import type { MissionState } from '../segment.ts';
 import {
@@ -22,7 +27,27 @@ import {
 } from './common.ts';
 
 /** Take-off safety speed over the stall speed (common practice). */
-const ALLOWANCE_SPEED_FACTOR = 1.2;
+const TAKEOFF_SPEED_FACTOR = 1.2;
+/** Approach speed over the stall speed in the landing configuration (common practice). */
+export const APPROACH_SPEED_FACTOR = 1.3;
+
+/** Thrust power of the time allowance: maximum for take-off, approach power for landing. */
+function allowancePower(
+  model: FlightModel,
+  kind: 'takeoff' | 'landing',
+  mass_kg: number,
+  h_m: number,
+): { P_W: number; V_m_s: number } {
+  const amb = ambientAt(model, h_m);
+  const factor = kind === 'takeoff' ? TAKEOFF_SPEED_FACTOR : APPROACH_SPEED_FACTOR;
+  const V = factor * stallTas(model, mass_kg, amb.atm, model.CLmaxFlaps);
+  if (kind === 'takeoff') {
+    return { P_W: availableThrustPower_W(model.pp, amb.atm, amb.pressureAltitude_m, V), V_m_s: V };
+  }
+  const q = 0.5 * amb.atm.rho_kg_m3 * V * V;
+  const CL = (mass_kg * G0) / (q * model.S_m2);
+  return { P_W: q * model.S_m2 * dragCoefficientOf(model.polar, CL) * V, V_m_s: V };
+}
 
 export function flyAllowance(
   ctx: LegContext,
@@ -64,9 +89,8 @@ export function flyAllowance(
   } else {
     try {
       const amb = ambientAt(model, start.h_m);
-      const V = ALLOWANCE_SPEED_FACTOR * stallTas(model, start.mass_kg, amb.atm, model.CLmaxFlaps);
-      const P = availableThrustPower_W(model.pp, amb.atm, amb.pressureAltitude_m, V);
-      amount = consumptionRate(model.pp, P, V, amb.atm, amb.pressureAltitude_m) * a.time_s;
+      const { P_W, V_m_s } = allowancePower(model, leg.kind, start.mass_kg, start.h_m);
+      amount = consumptionRate(model.pp, P_W, V_m_s, amb.atm, amb.pressureAltitude_m) * a.time_s;
     } catch (e) {
       return refusedLeg(ctx, leg, start, e instanceof Error ? e.message : String(e));
     }

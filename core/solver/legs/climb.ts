@@ -1,6 +1,8 @@
 /**
  * Climb leg: at a throttle setting, best-rate or a given speed, integrated over altitude:
- * ROC = (τ·P_avail − D·V)/W (Anderson, Introduction to Flight, ch. 6). The leg fails where
+ * ROC = (τ·P_avail − D·V)/(W·(1 + (V/g)·dV/dh)) (Anderson, Introduction to Flight, ch. 6;
+ * the acceleration factor of a speed schedule whose TAS changes with height, Aircraft
+ * Performance and Design, ch. 5; point.ts, slope.ts). The leg fails where
  * the rate of climb falls below settings.minClimbRate_m_s (the service-ceiling criterion,
  * 0.5 m/s common practice) before the target altitude.
  */

@@ -31,11 +31,17 @@ export interface LegContext {
 export interface LegCheckData {
   /** Minimum V/V_stall where the leg holds a given speed (null: not applicable). */
   minStallRatio: number | null;
-  /** Least power margin: required and available there (null: not applicable). */
-  power: { required_W: number; available_W: number } | null;
+  /**
+   * Least power margin: required and available there, and the TAS there (a jet's thrust is
+   * power / TAS). Null: not applicable, or a descent that never needs power (its power to
+   * dissipate is a warning instead).
+   */
+  power: { required_W: number; available_W: number; tas_m_s?: number } | null;
   /** Least rate of climb and the floor (climb legs). */
   climb: { min_m_s: number; floor_m_s: number } | null;
   maxAltitude_m: number | null;
+  /** Highest pressure altitude of the leg (what a ceiling limits). */
+  maxPressureAltitude_m?: number | null;
 }
 
 export interface LegOutcome {
@@ -83,6 +89,9 @@ export function baseResult(
   const model = ctx.model;
   const used = start.left - end.left;
   const time = end.t_s - start.t_s;
+  // Mean TAS along the flight path: ∫V dt over the time (the horizontal air distance over
+  // the time would understate the airspeed of a steep climb or descent).
+  const path = (end.path_m ?? 0) - (start.path_m ?? 0);
   return {
     index: ctx.index,
     id: leg.id,
@@ -97,7 +106,7 @@ export function baseResult(
     airDistance_m: end.air_m - start.air_m,
     fuelUsed_kg: model.consumable === 'fuel' ? used : 0,
     energyUsed_J: model.consumable === 'fuel' ? 0 : used,
-    meanTas_m_s: time > 0 ? (end.air_m - start.air_m) / time : 0,
+    meanTas_m_s: time > 0 ? path / time : 0,
     meanGroundSpeed_m_s: time > 0 ? (end.x_m - start.x_m) / time : 0,
     CL: { min: 0, max: 0 },
     LD: { min: 0, max: 0 },
@@ -195,7 +204,16 @@ export function flyFlightLeg(
       `${name}: the climb is limited to a 30° flight path; less than the set throttle is used.`,
     );
   }
+  const steep = s.steepDescent;
+  if (steep !== null) {
+    warnings.push(
+      `${name}: a descent at ${fmt(steep.rate_m_s)} m/s is steeper than an idle glide at ${fmt(steep.tas_m_s)} m/s (idle-glide sink ${fmt(steep.idleSink_m_s)} m/s at ${fmt(steep.h_m)} m); it needs drag devices (about ${fmt(steep.dissipate_W)} W to dissipate) or a lower rate.`,
+    );
+  }
   const seen = Number.isFinite(s.CLmin);
+  // A power check only where power is needed: a descent steeper than an idle glide needs none
+  // (the warning above says what it needs instead).
+  const needsPower = s.worstPowerRequired_W > 0;
   return {
     result: r,
     end: seg.end,
@@ -204,11 +222,16 @@ export function flyFlightLeg(
     checks: {
       minStallRatio: checks.stall && seen ? s.minStallRatio : null,
       power:
-        checks.power && seen
-          ? { required_W: s.worstPowerRequired_W, available_W: s.worstPowerAvailable_W }
+        checks.power && seen && needsPower
+          ? {
+              required_W: s.worstPowerRequired_W,
+              available_W: s.worstPowerAvailable_W,
+              tas_m_s: s.worstPowerTas_m_s,
+            }
           : null,
       climb: checks.climb && seen ? { min_m_s: s.minClimb_m_s, floor_m_s: climbFloor(spec) } : null,
       maxAltitude_m: seen ? s.maxAltitude_m : null,
+      maxPressureAltitude_m: seen ? s.maxPressureAltitude_m : null,
     },
   };
 }

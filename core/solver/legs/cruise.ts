@@ -1,6 +1,7 @@
 /**
  * Cruise leg: level flight at constant altitude, or cruise-climb (constant TAS and CL, the
- * altitude rising as the weight falls; Anderson, Aircraft Performance and Design, ch. 5),
+ * altitude rising as the weight falls; Anderson, Aircraft Performance and Design, ch. 5; a
+ * given EAS, CAS or Mach is converted to TAS at the leg start and the TAS held, with a warning),
  * ended by a ground distance (integrated over distance) or by an amount of fuel or battery
  * energy (integrated over the consumable left).
  */
@@ -46,6 +47,7 @@ export function flyCruise(ctx: LegContext, leg: CruiseLeg, start: MissionState):
   let speed: SpeedSchedule =
     leg.speed.kind === 'bestRange' ? { kind: 'bestRange' } : { kind: 'fixed', speed: leg.speed };
   let path = pathFor(field, speed, { kind: 'level' }, wind);
+  let cruiseClimbNote: string | null = null;
   if (leg.program === 'cruiseClimb') {
     // TAS and CL are set at the start of the leg and then held (Breguet cruise-climb).
     let V0: number;
@@ -65,6 +67,13 @@ export function flyCruise(ctx: LegContext, leg: CruiseLeg, start: MissionState):
     const CL = (2 * start.mass_kg * G0) / (rho * V0 * V0 * model.S_m2);
     speed = { kind: 'constantTas', tas_m_s: V0 };
     path = pathFor(field, speed, { kind: 'cruiseClimb', CL }, wind);
+    if (leg.speed.kind !== 'bestRange' && leg.speed.kind !== 'tas') {
+      const given =
+        leg.speed.kind === 'mach'
+          ? `Mach ${fmt(leg.speed.mach)}`
+          : `${leg.speed.kind.toUpperCase()} ${fmt(leg.speed.speed_m_s)} m/s`;
+      cruiseClimbNote = `${legName(ctx.index, leg)}: a cruise-climb holds its true airspeed: ${given} is converted at the start of the leg to ${fmt(V0)} m/s TAS, which is then held (the ${leg.speed.kind === 'mach' ? 'Mach number' : leg.speed.kind.toUpperCase()} changes as the aircraft climbs).`;
+    }
   }
   const fixedSpeed = leg.speed.kind !== 'bestRange' || leg.program === 'cruiseClimb';
   const limits: LimitKind[] = ['power', 'consumable', 'wind'];
@@ -75,6 +84,7 @@ export function flyCruise(ctx: LegContext, leg: CruiseLeg, start: MissionState):
       ? { path, indep: 'x', to: start.x_m + end.distance_m, limits, samples: ctx.samples }
       : { path, indep: 'q', to: Math.max(start.left - amount, 0), limits, samples: ctx.samples };
   const out = flyFlightLeg(ctx, leg, start, spec, wind, { stall: true, power: true, climb: false });
+  if (cruiseClimbNote !== null) out.warnings.unshift(cruiseClimbNote);
   if (!out.failed && end.by !== 'distance' && amount > start.left) {
     const unit = model.consumable === 'fuel' ? 'kg' : 'J';
     out.failed = true;

@@ -1,7 +1,10 @@
 /**
  * Descent leg, integrated over altitude: at a given rate and speed (thrust power
- * D·V − W·RoD, idle consumption below idle), or gliding at idle at the (L/D)max speed with
- * sink V/(L/D) (Anderson, Introduction to Flight, ch. 6).
+ * D·V − W·RoD·k_a with the acceleration factor k_a of the speed schedule, idle consumption
+ * below idle), or gliding at idle at the (L/D)max speed with sink V/((L/D)·k_a) (Anderson,
+ * Introduction to Flight, ch. 6, and Aircraft Performance and Design, ch. 5; point.ts). A rate
+ * steeper than an idle glide at that speed (thrust power required below zero) is flown at idle
+ * with a warning that it needs drag devices, and the leg gets no power check (legs/common.ts).
  */
 import type { DescentLeg } from '../../plan/schema.ts';
 import { fmt, type FlightPath } from '../point.ts';

@@ -38,6 +38,17 @@ describe('bestCruiseAltitude', () => {
     expect(Math.abs(solved - r.best!.remaining) / solved).toBeLessThan(1e-9);
   });
 
+  it('says when the best altitude is the top of the grid: the ceiling here', () => {
+    // Common practice: a jet's range keeps growing with altitude in this range, so with the
+    // fixture's 13 000 m ceiling the best altitude is the ceiling itself.
+    const r = bestCruiseAltitude(mission('jet', 1_500_000), { points: 9 });
+    expect(r.top_m - r.best!.altitude_m).toBeLessThanOrEqual(1); // the 1 m of AltitudeSweepResult.limitedBy
+    expect(r.limitedBy).toBe('ceiling');
+    expect(r.bottom_m).toBe(300); // departure 0 m + MIN_HEIGHT_ABOVE_DEPARTURE_M
+    const piston = bestCruiseAltitude(mission('prop', 500_000), { points: 9 });
+    expect(piston.limitedBy).toBeNull();
+  });
+
   it('with a strong headwind high up and light wind low, picks a lower altitude than in calm air', () => {
     // The legs fly east (course 090); a wind from 090 is a pure headwind (meteorological
     // convention). A jet-stream-like profile (common practice: winds aloft strengthen toward

@@ -31,14 +31,28 @@ describe('describeCheck: the check sentence in the reader’s units', () => {
       limit: 79637,
       quantity: 'power',
     });
-    // 1 hp = 745.699 872 W (NIST SP 811): 75.83 hp and 106.8 hp.
-    expect(describeCheck(c, 'aviation')).toBe(
-      'Leg 3 (cruise): needs 75.8 hp of thrust power, 107 hp available.',
-    );
-    expect(describeCheck(c, 'si')).toBe(
-      'Leg 3 (cruise): needs 56.5 kW of thrust power, 79.6 kW available.',
-    );
+    // 1 hp = 745.699 872 W (NIST SP 811): 75.83 hp and 106.8 hp. The leg is named in the
+    // check's label, not again in its sentence.
+    expect(describeCheck(c, 'aviation')).toBe('Needs 75.8 hp of thrust power, 107 hp available.');
+    expect(describeCheck(c, 'si')).toBe('Needs 56.5 kW of thrust power, 79.6 kW available.');
     expect(c.detail).toBe('SI sentence');
+  });
+
+  it('a jet power check in thrust: lbf, or kN in SI', () => {
+    const c = check({
+      id: 'power:2',
+      label: 'Leg 3 (cruise): power',
+      subject: 'Leg 3 (cruise)',
+      legIndex: 2,
+      value: 6156 * 200,
+      limit: 11_009 * 200,
+      quantity: 'power',
+      thrustRequired_N: 6156,
+      thrustAvailable_N: 11_009,
+    });
+    // 1 lbf = 4.448 221 615 260 5 N (NIST SP 811): 1383.9 lbf and 2474.9 lbf.
+    expect(describeCheck(c, 'aviation')).toBe('Needs 1384 lbf of thrust, 2475 lbf available.');
+    expect(describeCheck(c, 'si')).toBe('Needs 6.2 kN of thrust, 11.0 kN available.');
   });
 
   it('runway distances in feet, the screen height as 50 ft', () => {
@@ -71,7 +85,7 @@ describe('describeCheck: the check sentence in the reader’s units', () => {
       limit: 1.2,
     });
     expect(describeCheck(stall, 'aviation')).toBe(
-      'Leg 1 (cruise): lowest airspeed 1.36 × stall speed against 1.20.',
+      'Lowest airspeed 1.36 × stall speed against 1.20.',
     );
     const soc = check({ id: 'socFloor', value: 0.234, limit: 0.2 });
     expect(describeCheck(soc, 'si')).toBe(

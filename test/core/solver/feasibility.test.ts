@@ -1,4 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { atmosphereAt, pressureAltitudeFromPressure } from '../../../core/atmosphere.ts';
+import { rangePropConstantAltitudeSpeed } from '../../../core/breguet.ts';
+import { describeCheck } from '../../../core/solver/describe.ts';
 import { InputError } from '../../../core/errors.ts';
 import { fuelDensity_kg_L } from '../../../core/propulsion/index.ts';
 import { guardResult } from '../../../core/solver/guard.ts';
@@ -6,6 +9,7 @@ import { solvePlan } from '../../../core/solver/solve.ts';
 import type { PlanResult } from '../../../core/solver/types.ts';
 import { G0 } from '../../../core/units.ts';
 import {
+  ANDERSON_JET,
   ANDERSON_PROP,
   climb,
   cruise,
@@ -123,6 +127,51 @@ describe('feasibility checks, each broken on purpose', () => {
     expect(check(r, 'climb:0')!.quantity).toBe('verticalSpeed');
   });
 
+  it('the ceiling is compared with the pressure altitude (low QNH: higher than above MSL)', () => {
+    const qnh = 98_000;
+    const r = solvePlan(
+      makePlan('propeller', [climb({ toAltitude_m: 3000 })], { environment: { qnh_Pa: qnh } }),
+    );
+    const c = check(r, 'ceiling')!;
+    // Hp = h + Hp(QNH) (core/atmosphere.ts; 1976 U.S. Standard Atmosphere pressure relation).
+    const offset = pressureAltitudeFromPressure(qnh);
+    expect(offset).toBeGreaterThan(250);
+    expect(rel(c.value, 3000 + offset)).toBeLessThan(1e-9);
+    expect(c.detail).toMatch(/^Highest pressure altitude \d+ m \(Leg 1 \(climb\)\)/);
+    expect(describeCheck(c, 'si')).toMatch(/^Highest pressure altitude /);
+  });
+
+  it('a jet power check carries the thrust; per-leg sentences do not repeat the leg', () => {
+    const V = 200;
+    const h = 5000;
+    const r = solvePlan(
+      makePlan(
+        'jet',
+        [
+          cruise({
+            speed: { kind: 'tas', speed_m_s: V },
+            end: { by: 'distance', distance_m: 100_000 },
+          }),
+        ],
+        { departure_m: h },
+      ),
+    );
+    const c = check(r, 'power:0')!;
+    // Level flight: thrust = drag D = q·S·(CD0 + k·CL²) at the heaviest point, the start
+    // (Anderson, Introduction to Flight, ch. 6); available T_SL·σ^0.8 (fixture lapse).
+    const atm = atmosphereAt(h);
+    const q = 0.5 * atm.rho_kg_m3 * V * V;
+    const CL = ANDERSON_JET.W0_N / (q * ANDERSON_JET.S);
+    const kJet = 1 / ((Math.PI * ANDERSON_JET.e * ANDERSON_JET.span ** 2) / ANDERSON_JET.S);
+    const D = q * ANDERSON_JET.S * (ANDERSON_JET.CD0 + kJet * CL * CL);
+    expect(rel(c.thrustRequired_N!, D)).toBeLessThan(1e-9);
+    expect(rel(c.thrustAvailable_N!, 40_000 * atm.sigma ** 0.8)).toBeLessThan(1e-9);
+    expect(rel(c.value, D * V)).toBeLessThan(1e-9);
+    expect(describeCheck(c, 'aviation')).toMatch(/^Needs \d+ lbf of thrust, \d+ lbf available\.$/);
+    expect(c.label).toBe('Leg 1 (cruise): power');
+    for (const x of r.checks) expect(x.detail).not.toMatch(/^Leg \d/);
+  });
+
   it('going below the battery floor fails the socFloor check', () => {
     const r = solvePlan(
       makePlan('electric', [cruise({ end: { by: 'distance', distance_m: 20_000 } })], {
@@ -136,9 +185,13 @@ describe('feasibility checks, each broken on purpose', () => {
   });
 
   it('fuel exhausted mid-leg: the leg fails there and the result holds everything up to it', () => {
+    const V = 55;
     const r = solvePlan(
       makePlan('propeller', [
-        cruise({ end: { by: 'distance', distance_m: 5_000_000 } }),
+        cruise({
+          end: { by: 'distance', distance_m: 5_000_000 },
+          speed: { kind: 'tas', speed_m_s: V },
+        }),
         landing({ by: 'fuel', fuel_kg: 1 }),
       ]),
     );
@@ -147,8 +200,20 @@ describe('feasibility checks, each broken on purpose', () => {
     expect(leg.error).toMatch(/fuel exhausted after \d+ m of 5000000 m/);
     expect(leg.end.fuel_kg).toBeGreaterThanOrEqual(0);
     expect(leg.end.fuel_kg).toBeLessThan(1e-6);
-    expect(leg.groundDistance_m).toBeGreaterThan(1e6);
-    expect(leg.groundDistance_m).toBeLessThan(5e6);
+    // Where the fuel runs out: the propeller range at constant altitude and speed burning the
+    // whole load (Anderson, Introduction to Flight, ch. 6, core/breguet.ts).
+    const R = rangePropConstantAltitudeSpeed({
+      eta: ANDERSON_PROP.eta,
+      cp: ANDERSON_PROP.bsfc_kg_J * G0,
+      V,
+      rho: atmosphereAt(0).rho_kg_m3,
+      S: ANDERSON_PROP.S,
+      CD0: ANDERSON_PROP.CD0,
+      k: 1 / ((Math.PI * ANDERSON_PROP.e * ANDERSON_PROP.span ** 2) / ANDERSON_PROP.S),
+      W0: ANDERSON_PROP.W0_N,
+      W1: ANDERSON_PROP.W0_N - ANDERSON_PROP.fuel_N,
+    });
+    expect(rel(leg.groundDistance_m, R)).toBeLessThan(1e-6);
     expect(r.totals.groundDistance_m).toBe(leg.groundDistance_m);
     expect(leg.series.x_m.at(-1)).toBe(leg.end.x_m);
     expect(r.legs[1]!.status).toBe('notReached');

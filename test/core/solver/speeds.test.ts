@@ -98,8 +98,10 @@ describe('speed schedules against the polar optima (Anderson, Introduction to Fl
   });
 
   it('electric best range with Peukert n = 1.3 matches Traub’s U_R = √(2W/ρS)·[k(n+1)/(CD0(3n−1))]^¼', () => {
+    // Rated time 20 h: the cruise draws more than the rated power E/Rt = 3.7 W, where the
+    // Peukert correction applies (core/propulsion/electric.ts).
     const ctx = context('electric', 0, undefined, {
-      powerplant: electricPowerplant({}, { peukertExponent: 1.3 }),
+      powerplant: electricPowerplant({}, { peukertExponent: 1.3, ratedDischargeTime_s: 72_000 }),
     });
     const kk = 1 / (Math.PI * TRAUB_UAV.e * TRAUB_UAV.AR);
     const n = 1.3;
@@ -109,6 +111,43 @@ describe('speed schedules against the polar optima (Anderson, Introduction to Fl
       Math.pow((kk * (n + 1)) / (TRAUB_UAV.CD0 * (3 * n - 1)), 0.25);
     expect(rel(UR, 8.737)).toBeLessThan(2e-4); // REFERENCES.md computed example: 8.737 m/s
     expect(rel(bestRangeTas(ctx).tas_m_s, UR)).toBeLessThan(1e-7);
+  });
+
+  it('electric best range below the rated power is the (L/D)max speed; between, the rated-power speed', () => {
+    const n = 1.3;
+    const kk = 1 / (Math.PI * TRAUB_UAV.e * TRAUB_UAV.AR);
+    const at = (Rt: number) =>
+      context('electric', 0, undefined, {
+        powerplant: electricPowerplant({}, { peukertExponent: n, ratedDischargeTime_s: Rt }),
+      });
+    // Rated 1 h: E/Rt = 74 W, far above the ~25 W drawn; the drain is P, so V/P is maximised
+    // at (L/D)max, CL = √(CD0/k) (Anderson, Introduction to Flight, ch. 6).
+    const slow = at(3600);
+    expect(
+      rel(bestRangeTas(slow).tas_m_s, speedFor(slow, Math.sqrt(TRAUB_UAV.CD0 / kk))),
+    ).toBeLessThan(1e-9);
+    // A rated power between the battery powers at Traub's U_R and at (L/D)max: the optimum is
+    // the speed that draws exactly the rated power (P_req/η = E/Rt, η = 0.6).
+    const ref = at(3600);
+    const batteryPower = (V: number) => {
+      const rho = ref.amb.atm.rho_kg_m3;
+      const W = TRAUB_UAV.m * G0;
+      return (
+        (0.5 * rho * V ** 3 * TRAUB_UAV.S * TRAUB_UAV.CD0 +
+          (2 * W * W * kk) / (rho * V * TRAUB_UAV.S)) /
+        0.6
+      );
+    };
+    const UR =
+      Math.sqrt((2 * TRAUB_UAV.m * G0) / (ref.amb.atm.rho_kg_m3 * TRAUB_UAV.S)) *
+      Math.pow((kk * (n + 1)) / (TRAUB_UAV.CD0 * (3 * n - 1)), 0.25);
+    const Vmd = speedFor(ref, Math.sqrt(TRAUB_UAV.CD0 / kk));
+    const rated = 0.5 * (batteryPower(UR) + batteryPower(Vmd));
+    const mid = at(TRAUB_UAV.energy_J / rated);
+    const V = bestRangeTas(mid).tas_m_s;
+    expect(V).toBeGreaterThan(UR);
+    expect(V).toBeLessThan(Vmd);
+    expect(rel(batteryPower(V), rated)).toBeLessThan(1e-9);
   });
 
   it('propeller best rate of climb with power independent of speed is at the minimum-power speed', () => {

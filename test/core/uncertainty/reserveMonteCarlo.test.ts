@@ -177,4 +177,60 @@ describe('spreads', () => {
     }
     expect(JSON.stringify(plan)).toBe(before);
   });
+
+  it('perturbs the winds-aloft table too (same spreads), and legs flying it feel the draws', () => {
+    // The twelve-leg plan with a two-level table that every leg with a course flies.
+    const base = example('twelve-legs');
+    const plan: Plan = {
+      ...base,
+      environment: {
+        ...base.environment,
+        windsAloft: [
+          { altitude_m: 0, from_deg: 200, speed_m_s: 6 },
+          { altitude_m: 3000, from_deg: 240, speed_m_s: 14, isaOffset_K: -2 },
+        ],
+      },
+      legs: base.legs.map((l) => ('wind' in l ? { ...l, windSource: 'aloft' as const } : l)),
+    };
+    const before = JSON.stringify(plan);
+    const rng = normalSource(4);
+    const spreads = { ...zero, windSpeed_m_s: 3, windDirection_deg: 20 };
+    const speeds: number[] = [];
+    for (let i = 0; i < 100; i++) {
+      const { plan: p, draws } = perturbPlan(plan, spreads, rng);
+      const levels = p.environment.windsAloft!;
+      expect(levels).toHaveLength(2);
+      expect(levels[1]!.isaOffset_K).toBe(-2);
+      expect(levels[1]!.altitude_m).toBe(3000);
+      for (const l of levels) {
+        expect(l.speed_m_s).toBeGreaterThanOrEqual(0);
+        expect(l.from_deg).toBeGreaterThanOrEqual(0);
+        expect(l.from_deg).toBeLessThanOrEqual(360);
+      }
+      const d = draws.find((x) => x.path === 'environment.windsAloft.1.speed_m_s');
+      expect(d?.value).toBe(levels[1]!.speed_m_s);
+      expect(draws.some((x) => x.path === 'environment.windsAloft.0.from_deg')).toBe(true);
+      speeds.push(levels[1]!.speed_m_s);
+    }
+    expect(JSON.stringify(plan)).toBe(before);
+    // Normal draws around 14 m/s with σ = 3 m/s: the sample mean and spread (100 draws; the
+    // standard error of the mean is 0.3 m/s, common statistics).
+    const m = speeds.reduce((a, b) => a + b, 0) / speeds.length;
+    const sd = Math.sqrt(speeds.reduce((a, b) => a + (b - m) ** 2, 0) / (speeds.length - 1));
+    expect(Math.abs(m - 14)).toBeLessThan(1.2);
+    expect(sd).toBeGreaterThan(2);
+    expect(sd).toBeLessThan(4);
+    // The table's wind enters the solution: the margin spreads, and the table inputs are ranked.
+    const mc = reserveMonteCarlo(plan, spreads, { samples: 60, seed: 2 });
+    expect(mc.margin!.max).toBeGreaterThan(mc.margin!.min);
+    expect(mc.importance.some((x) => x.input.startsWith('environment.windsAloft.'))).toBe(true);
+    // The table's draws come after the others: with the same random seed, the legs and the
+    // aircraft draw the same values with or without a table.
+    const tabled = { ...base, environment: plan.environment };
+    const a = perturbPlan(base, spreads, normalSource(8)).draws;
+    const b = perturbPlan(tabled, spreads, normalSource(8)).draws;
+    expect(a.some((x) => x.path.startsWith('environment'))).toBe(false);
+    expect(b.filter((x) => !x.path.startsWith('environment'))).toEqual(a);
+    expect(b.length).toBe(a.length + 4);
+  });
 });
