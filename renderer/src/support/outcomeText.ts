@@ -3,13 +3,14 @@
  * display units, the verdict sentence, the consumable columns.
  */
 import type { Check, PlanResult } from '../../../core/solver/types.ts';
-import { checkAmount } from '../../../core/solver/describe.ts';
+import { checkFigures as coreCheckFigures } from '../../../core/solver/describe.ts';
 import type { Quantity, UnitSystemId } from '../../../core/units.ts';
 import { formatNumber } from '../../../core/format.ts';
 
 /** "value vs limit" in display units (core/solver/describe.ts: runway lengths in m or ft). */
 export function checkFigures(check: Check, system: UnitSystemId): string {
-  return `${checkAmount(check, check.value, system)} vs limit ${checkAmount(check, check.limit, system)}`;
+  const { value, limit } = coreCheckFigures(check, system);
+  return `${value} vs limit ${limit}`;
 }
 
 export function marginText(check: Check): string {
