@@ -14,33 +14,9 @@ import {
 } from '../../core/polar.ts';
 import { peukertDrainRate_W } from '../../core/propulsion/electric.ts';
 import { G0, HOUR, WH } from '../../core/units.ts';
+import { goldenMax } from '../support/goldenMax.ts';
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
-
-/** Golden-section search for the maximum of a unimodal f on [a, b] (Kiefer 1953, common practice). */
-function goldenMax(f: (x: number) => number, a: number, b: number): number {
-  const r = (Math.sqrt(5) - 1) / 2;
-  let x1 = b - r * (b - a);
-  let x2 = a + r * (b - a);
-  let f1 = f(x1);
-  let f2 = f(x2);
-  for (let i = 0; i < 200 && b - a > 1e-12; i++) {
-    if (f1 < f2) {
-      a = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = a + r * (b - a);
-      f2 = f(x2);
-    } else {
-      b = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = b - r * (b - a);
-      f1 = f(x1);
-    }
-  }
-  return (a + b) / 2;
-}
 
 describe('Hepperle (2012), NATO STO-MP-AVT-209', () => {
   it('200 Wh/kg, η 0.8, L/D 16, m_batt/m 0.3 → 281.9 km', () => {
