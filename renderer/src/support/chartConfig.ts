@@ -156,6 +156,7 @@ export function chartOptions(
         display: hasY2,
         position: 'right',
         beginAtZero: spec.beginAtZero ?? hasY2,
+        ...(spec.y2Max === undefined ? {} : { max: spec.y2Max }),
         title: axisTitle(spec.y2Title ?? ''),
         ticks,
         grid: { drawOnChartArea: false },

@@ -97,6 +97,7 @@ export function profileChart(
     xTitle: axis === 'distance' ? `Ground distance (${label('distance', system)})` : 'Time (min)',
     yTitle: `Altitude (${label('altitude', system)})`,
     y2Title: battery ? 'State of charge (%)' : `Fuel (${label('fuelMass', system)})`,
+    ...(battery ? { y2Max: 100 } : {}),
     series,
   };
 }

@@ -34,6 +34,8 @@ export interface ChartSpec {
   xTitle: string;
   yTitle: string;
   y2Title?: string;
+  /** Upper bound of the right axis where the quantity has one (state of charge: 100 %). */
+  y2Max?: number;
   series: Series[];
   /** Start the y axes at zero. */
   beginAtZero?: boolean;
