@@ -13,6 +13,34 @@
  */
 import { InputError, requireFinite, requirePositive } from './errors.ts';
 
+/** Start and end weight, N (W0 > W1 > 0). */
+export interface WeightSpan {
+  W0: number;
+  W1: number;
+}
+/** Lift and drag coefficient held along the flight. */
+export interface ConstantCL extends WeightSpan {
+  CL: number;
+  CD: number;
+}
+/** Constant altitude and speed: the polar's CD0 and k at dynamic pressure ½ρV². */
+export interface ConstantAltitudeSpeed extends WeightSpan {
+  V: number;
+  rho: number;
+  S: number;
+  CD0: number;
+  k: number;
+}
+/** Jet: weight-specific thrust fuel consumption c_t, 1/s. */
+export interface JetConsumption {
+  ct: number;
+}
+/** Propeller: efficiency η and weight-specific power fuel consumption c_p, 1/m. */
+export interface PropConsumption {
+  eta: number;
+  cp: number;
+}
+
 function positive(field: string, v: number): number {
   return requirePositive(field, v);
 }
@@ -76,14 +104,7 @@ function inverseDragIntegral(
 // --- Jet -----------------------------------------------------------------------------------
 
 /** Cruise-climb (constant CL and V): R = (V/c_t)(CL/CD)·ln(W0/W1). Anderson, Intro. to Flight, ch. 6. */
-export function rangeJetCruiseClimb(a: {
-  ct: number;
-  V: number;
-  CL: number;
-  CD: number;
-  W0: number;
-  W1: number;
-}): number {
+export function rangeJetCruiseClimb(a: JetConsumption & ConstantCL & { V: number }): number {
   const LD = positive('CL', a.CL) / positive('CD', a.CD);
   return finiteResult(
     (positive('V', a.V) / positive('ct', a.ct)) * LD * logRatio(a.W0, a.W1),
@@ -96,15 +117,9 @@ export function rangeJetCruiseClimb(a: {
  * Constant altitude and CL (speed falls as weight falls):
  * R = (2/c_t)·√(2/(ρS))·(CL^½/CD)·(√W0 − √W1). Anderson, Introduction to Flight, ch. 6.
  */
-export function rangeJetConstantAltitudeCL(a: {
-  ct: number;
-  rho: number;
-  S: number;
-  CL: number;
-  CD: number;
-  W0: number;
-  W1: number;
-}): number {
+export function rangeJetConstantAltitudeCL(
+  a: JetConsumption & ConstantCL & { rho: number; S: number },
+): number {
   const factor = Math.sqrt(2 / (positive('rho', a.rho) * positive('S', a.S)));
   const ratio = Math.sqrt(positive('CL', a.CL)) / positive('CD', a.CD);
   return finiteResult(
@@ -118,16 +133,7 @@ export function rangeJetConstantAltitudeCL(a: {
  * Constant altitude and speed (CL falls as weight falls): dx/dW = −V/(c_t·D(W)), so
  * R = (V/c_t)·∫dW/D. Anderson, Aircraft Performance and Design, ch. 5.
  */
-export function rangeJetConstantAltitudeSpeed(a: {
-  ct: number;
-  V: number;
-  rho: number;
-  S: number;
-  CD0: number;
-  k: number;
-  W0: number;
-  W1: number;
-}): number {
+export function rangeJetConstantAltitudeSpeed(a: JetConsumption & ConstantAltitudeSpeed): number {
   const integral = inverseDragIntegral(a.V, a.rho, a.S, a.CD0, a.k, a.W0, a.W1);
   return finiteResult((a.V / positive('ct', a.ct)) * integral, 'ct', a.ct);
 }
@@ -136,28 +142,15 @@ export function rangeJetConstantAltitudeSpeed(a: {
  * Constant CL (any altitude program): E = (1/c_t)(CL/CD)·ln(W0/W1).
  * Anderson, Introduction to Flight, ch. 6.
  */
-export function enduranceJetConstantCL(a: {
-  ct: number;
-  CL: number;
-  CD: number;
-  W0: number;
-  W1: number;
-}): number {
+export function enduranceJetConstantCL(a: JetConsumption & ConstantCL): number {
   const LD = positive('CL', a.CL) / positive('CD', a.CD);
   return finiteResult((LD / positive('ct', a.ct)) * logRatio(a.W0, a.W1), 'ct', a.ct);
 }
 
 /** Constant altitude and speed: E = (1/c_t)·∫dW/D. Anderson, Aircraft Performance and Design, ch. 5. */
-export function enduranceJetConstantAltitudeSpeed(a: {
-  ct: number;
-  V: number;
-  rho: number;
-  S: number;
-  CD0: number;
-  k: number;
-  W0: number;
-  W1: number;
-}): number {
+export function enduranceJetConstantAltitudeSpeed(
+  a: JetConsumption & ConstantAltitudeSpeed,
+): number {
   const integral = inverseDragIntegral(a.V, a.rho, a.S, a.CD0, a.k, a.W0, a.W1);
   return finiteResult(integral / positive('ct', a.ct), 'ct', a.ct);
 }
@@ -168,14 +161,7 @@ export function enduranceJetConstantAltitudeSpeed(a: {
  * Constant CL (any altitude program): R = (η/c_p)(CL/CD)·ln(W0/W1).
  * Anderson, Introduction to Flight, ch. 6.
  */
-export function rangePropConstantCL(a: {
-  eta: number;
-  cp: number;
-  CL: number;
-  CD: number;
-  W0: number;
-  W1: number;
-}): number {
+export function rangePropConstantCL(a: PropConsumption & ConstantCL): number {
   const LD = positive('CL', a.CL) / positive('CD', a.CD);
   return finiteResult(
     (efficiency(a.eta) / positive('cp', a.cp)) * LD * logRatio(a.W0, a.W1),
@@ -188,17 +174,7 @@ export function rangePropConstantCL(a: {
  * Constant altitude and speed: dx/dW = −η/(c_p·D(W)), R = (η/c_p)·∫dW/D.
  * Anderson, Aircraft Performance and Design, ch. 5.
  */
-export function rangePropConstantAltitudeSpeed(a: {
-  eta: number;
-  cp: number;
-  V: number;
-  rho: number;
-  S: number;
-  CD0: number;
-  k: number;
-  W0: number;
-  W1: number;
-}): number {
+export function rangePropConstantAltitudeSpeed(a: PropConsumption & ConstantAltitudeSpeed): number {
   const integral = inverseDragIntegral(a.V, a.rho, a.S, a.CD0, a.k, a.W0, a.W1);
   return finiteResult((efficiency(a.eta) / positive('cp', a.cp)) * integral, 'cp', a.cp);
 }
@@ -207,16 +183,9 @@ export function rangePropConstantAltitudeSpeed(a: {
  * Constant altitude and CL: E = (η/c_p)(CL^1.5/CD)·√(2ρS)·(W1^−½ − W0^−½).
  * Anderson, Introduction to Flight, ch. 6.
  */
-export function endurancePropConstantAltitudeCL(a: {
-  eta: number;
-  cp: number;
-  rho: number;
-  S: number;
-  CL: number;
-  CD: number;
-  W0: number;
-  W1: number;
-}): number {
+export function endurancePropConstantAltitudeCL(
+  a: PropConsumption & ConstantCL & { rho: number; S: number },
+): number {
   const ratio = Math.pow(positive('CL', a.CL), 1.5) / positive('CD', a.CD);
   const factor = Math.sqrt(2 * positive('rho', a.rho) * positive('S', a.S));
   // W1^−½ − W0^−½ = (√W0 − √W1)/√(W0·W1)
@@ -232,15 +201,7 @@ export function endurancePropConstantAltitudeCL(a: {
  * Cruise-climb (constant CL and V): dt/dW = −η/(c_p·V·D), D = W·CD/CL, so
  * E = (η/(c_p·V))(CL/CD)·ln(W0/W1). Anderson, Aircraft Performance and Design, ch. 5.
  */
-export function endurancePropCruiseClimb(a: {
-  eta: number;
-  cp: number;
-  V: number;
-  CL: number;
-  CD: number;
-  W0: number;
-  W1: number;
-}): number {
+export function endurancePropCruiseClimb(a: PropConsumption & ConstantCL & { V: number }): number {
   const LD = positive('CL', a.CL) / positive('CD', a.CD);
   const coefficient = efficiency(a.eta) / (positive('cp', a.cp) * positive('V', a.V));
   return finiteResult(coefficient * LD * logRatio(a.W0, a.W1), 'cp', a.cp);
@@ -250,17 +211,9 @@ export function endurancePropCruiseClimb(a: {
  * Constant altitude and speed: dt/dW = −η/(c_p·V·D(W)), E = (η/(c_p·V))·∫dW/D.
  * Anderson, Aircraft Performance and Design, ch. 5.
  */
-export function endurancePropConstantAltitudeSpeed(a: {
-  eta: number;
-  cp: number;
-  V: number;
-  rho: number;
-  S: number;
-  CD0: number;
-  k: number;
-  W0: number;
-  W1: number;
-}): number {
+export function endurancePropConstantAltitudeSpeed(
+  a: PropConsumption & ConstantAltitudeSpeed,
+): number {
   const integral = inverseDragIntegral(a.V, a.rho, a.S, a.CD0, a.k, a.W0, a.W1);
   return finiteResult((efficiency(a.eta) / (positive('cp', a.cp) * a.V)) * integral, 'cp', a.cp);
 }
