@@ -4,6 +4,7 @@
  */
 import type { Plan } from '../plan/schema.ts';
 import { consumableOf } from '../propulsion/index.ts';
+import { noFlightFigures } from './legs/common.ts';
 import type { LegResult, PlanResult } from './types.ts';
 
 /** A result for a plan the solver could not even start on (an internal error). */
@@ -32,16 +33,7 @@ export function crashedResult(plan: Plan, e: unknown): PlanResult {
     energyUsed_J: 0,
     meanTas_m_s: 0,
     meanGroundSpeed_m_s: 0,
-    CL: { min: 0, max: 0 },
-    LD: { min: 0, max: 0 },
-    minStallRatio: 0,
-    powerRequired_W: 0,
-    powerAvailable_W: 0,
-    headwind_m_s: 0,
-    crosswind_m_s: 0,
-    heading_deg: 0,
-    steps: 0,
-    series: { t_s: [], x_m: [], h_m: [], mass_kg: [], fuel_kg: [], energy_J: [], tas_m_s: [] },
+    ...noFlightFigures(),
   }));
   return {
     consumable,

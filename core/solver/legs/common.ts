@@ -108,6 +108,25 @@ export function baseResult(
     energyUsed_J: model.consumable === 'fuel' ? 0 : used,
     meanTas_m_s: time > 0 ? path / time : 0,
     meanGroundSpeed_m_s: time > 0 ? (end.x_m - start.x_m) / time : 0,
+    ...noFlightFigures(),
+  };
+}
+
+/** The flight figures of a leg that was not integrated (allowance, not reached, crashed). */
+export function noFlightFigures(): Pick<
+  LegResult,
+  | 'CL'
+  | 'LD'
+  | 'minStallRatio'
+  | 'powerRequired_W'
+  | 'powerAvailable_W'
+  | 'headwind_m_s'
+  | 'crosswind_m_s'
+  | 'heading_deg'
+  | 'steps'
+  | 'series'
+> {
+  return {
     CL: { min: 0, max: 0 },
     LD: { min: 0, max: 0 },
     minStallRatio: 0,
