@@ -80,7 +80,10 @@ function loadPlan(path: string, io: CliIo): { plan: Plan; warnings: string[] } |
     return null;
   }
   const r = parsePlanText(text);
-  if (r.ok) return { plan: r.plan, warnings: r.warnings };
+  if (r.ok) {
+    const changes = r.changes.map((c) => `updated from an older plan file: ${c}`);
+    return { plan: r.plan, warnings: [...changes, ...r.warnings] };
+  }
   const n = r.issues.length;
   io.stderr(`${path}: not a usable plan file (${n} problem${n === 1 ? '' : 's'}):\n`);
   for (const issue of r.issues) io.stderr(`  ${issue.message}\n`);

@@ -23,7 +23,7 @@ import { payloadRange } from '../core/optimize/payloadRange.ts';
 import { reserveSensitivity } from '../core/optimize/sensitivity.ts';
 import { bestSpeedForLeg, legSpeedRange } from '../core/optimize/speedSweep.ts';
 import { parsePlanText } from '../core/plan/load.ts';
-import { PlanSchema } from '../core/plan/schema.ts';
+import { PLAN_SCHEMA_VERSION, PlanSchema } from '../core/plan/schema.ts';
 import type { Plan } from '../core/plan/schema.ts';
 import { dragCoefficient, polarCoefficients } from '../core/polar.ts';
 import { flyLeg } from '../core/solver/legs/index.ts';
@@ -133,7 +133,7 @@ const loiter = (id: string, time_s: number) => ({
 function benchPlan(name: string, legs: unknown[], reserves: boolean): Plan {
   return PlanSchema.parse({
     format: 'legwise-plan',
-    schemaVersion: 1,
+    schemaVersion: PLAN_SCHEMA_VERSION,
     name,
     aircraft: andersonJet(),
     environment: { isaOffset_K: 0, qnh_Pa: 101325, departureElevation_m: 0, arrivalElevation_m: 0 },

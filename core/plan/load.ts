@@ -22,8 +22,13 @@ import { planWarnings } from './sanity.ts';
 
 export type { PlanIssue } from './issues.ts';
 
+/**
+ * `changes`: what migrating an older file changed, in plain words (empty for a current file);
+ * `warnings`: unusual values (sanity.ts).
+ */
 export type LoadResult =
-  { ok: true; plan: Plan; warnings: string[] } | { ok: false; issues: PlanIssue[] };
+  | { ok: true; plan: Plan; warnings: string[]; changes: string[] }
+  | { ok: false; issues: PlanIssue[] };
 
 export interface LoadOptions {
   /** Migration steps to use instead of the shipped ones (tests, future versions). */
@@ -107,8 +112,9 @@ export function parsePlan(data: unknown, options: LoadOptions = {}): LoadResult 
   const header = headerIssue(data, migrations);
   if (header !== undefined) return refuse([header]);
   let raw: RawPlan;
+  const changes: string[] = [];
   try {
-    raw = migratePlan(data, migrations);
+    raw = migratePlan(data, migrations, PLAN_SCHEMA_VERSION, changes);
   } catch (err) {
     if (err instanceof InputError)
       return refuse([issue(err.field, `${describeValue(err.value)} — must be ${err.limit}`)]);
@@ -121,7 +127,7 @@ export function parsePlan(data: unknown, options: LoadOptions = {}): LoadResult 
   }
   const rules = crossFieldIssues(parsed.data);
   if (unknown.length > 0 || rules.length > 0) return refuse([...unknown, ...rules]);
-  return { ok: true, plan: parsed.data, warnings: planWarnings(parsed.data) };
+  return { ok: true, plan: parsed.data, warnings: planWarnings(parsed.data), changes };
 }
 
 /**

@@ -2,23 +2,28 @@
  * Plan-file migrations: a chain of small steps, each lifting a raw (not yet validated) plan
  * from schema version v to v + 1, so a file written by any earlier Legwise opens in this one.
  * Steps run before validation and so must tolerate any JSON; they never touch physics, only
- * the shape of the file. Version 1 is the first published format, so the chain is empty for
- * now; the next format change adds `MIGRATIONS[1]` and raises PLAN_SCHEMA_VERSION.
+ * the shape of the file and the defaults that carry an old file's meaning into a new model.
+ * Each step reports what it changed in plain words (`notes`), which the loader hands on so
+ * the planner and the CLI can tell the user.
  */
 import { InputError } from '../errors.ts';
 import { PLAN_SCHEMA_VERSION } from './schema.ts';
+import { migrateV1toV2 } from './migrations/v1to2.ts';
 
 /** A parsed JSON object whose shape is not yet known. */
 export type RawPlan = Record<string, unknown>;
 
-/** Lifts a raw plan from version v to v + 1 (must not mutate its argument). */
-export type Migration = (raw: RawPlan) => RawPlan;
+/**
+ * Lifts a raw plan from version v to v + 1 (must not mutate its argument); pushes one note
+ * per change of meaning onto `notes`.
+ */
+export type Migration = (raw: RawPlan, notes: string[]) => RawPlan;
 
 /** Keyed by the version a step starts from. */
 export type MigrationTable = Readonly<Record<number, Migration>>;
 
 /** The migrations shipped with this version of Legwise. */
-export const MIGRATIONS: MigrationTable = {};
+export const MIGRATIONS: MigrationTable = { 1: migrateV1toV2 };
 
 /** Oldest schema version the table can bring up to `target`. */
 export function oldestReadableVersion(
@@ -39,6 +44,7 @@ export function migratePlan(
   raw: RawPlan,
   migrations: MigrationTable = MIGRATIONS,
   target = PLAN_SCHEMA_VERSION,
+  notes: string[] = [],
 ): RawPlan {
   const from = raw.schemaVersion;
   const oldest = oldestReadableVersion(migrations, target);
@@ -53,7 +59,7 @@ export function migratePlan(
     }
     let next: RawPlan;
     try {
-      next = step(current);
+      next = step(current, notes);
     } catch (err) {
       const why = err instanceof Error ? err.message : String(err);
       throw new InputError('schemaVersion', v, `convertible to version ${v + 1} (${why})`);

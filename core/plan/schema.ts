@@ -9,7 +9,7 @@
 import { z } from 'zod';
 
 export const PLAN_FORMAT = 'legwise-plan';
-export const PLAN_SCHEMA_VERSION = 1;
+export const PLAN_SCHEMA_VERSION = 2;
 
 /** A finite number in [min, max] (or (min, max] with `openMin`), unit named in the message. */
 function bounded(min: number, max: number, unit = '', openMin = false) {

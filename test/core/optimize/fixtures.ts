@@ -5,7 +5,7 @@
  * Quantities the examples do not give (CLmax, maximum thrust, masses split, tank size) are
  * invented, chosen inside the common-practice ranges.
  */
-import { PlanSchema } from '../../../core/plan/schema.ts';
+import { PLAN_SCHEMA_VERSION, PlanSchema } from '../../../core/plan/schema.ts';
 import type { Leg, Plan } from '../../../core/plan/schema.ts';
 import { G0, HP, LB } from '../../../core/units.ts';
 
@@ -23,7 +23,7 @@ const calm = { speed_m_s: 0, from_deg: 0 };
 function plan(name: string, aircraft: Plan['aircraft'], legs: Leg[], reserves = noReserves): Plan {
   return PlanSchema.parse({
     format: 'legwise-plan',
-    schemaVersion: 1,
+    schemaVersion: PLAN_SCHEMA_VERSION,
     name,
     notes: '',
     aircraft,

@@ -40,7 +40,7 @@ describe('good plan files', () => {
     if (!r.ok) throw new Error('demo refused');
     const text = serializePlan(r.plan);
     expect(text.endsWith('}\n')).toBe(true);
-    expect(text).toContain('\n  "schemaVersion": 1,\n');
+    expect(text).toContain('\n  "schemaVersion": 2,\n');
     const again = parsePlan(JSON.parse(text));
     expect(again.ok && again.plan).toEqual(r.plan);
     expect(serializePlan(again.ok ? again.plan : r.plan)).toBe(text);
@@ -158,7 +158,7 @@ describe('bad plan files are refused with path-named messages', () => {
       {
         path: 'schemaVersion',
         message:
-          'schemaVersion: this file was written by a newer Legwise (version 2); this version reads up to 1 — update Legwise to open it',
+          'schemaVersion: this file was written by a newer Legwise (version 3); this version reads up to 2 — update Legwise to open it',
       },
     ]);
   });
@@ -173,7 +173,7 @@ describe('bad plan files are refused with path-named messages', () => {
     }
     const old = demoJson('light-jet.json');
     old.schemaVersion = 0;
-    expect(issuesOf(parsePlan(old))[0]?.message).toBe('schemaVersion: 0 — must be from 1 to 1');
+    expect(issuesOf(parsePlan(old))[0]?.message).toBe('schemaVersion: 0 — must be from 1 to 2');
   });
 
   it('wrong format tag is checked first', () => {

@@ -4,7 +4,15 @@ import { parsePlan } from '../../../core/plan/load.ts';
 import { MIGRATIONS, migratePlan, oldestReadableVersion } from '../../../core/plan/migrate.ts';
 import type { Migration, RawPlan } from '../../../core/plan/migrate.ts';
 import { PLAN_SCHEMA_VERSION } from '../../../core/plan/schema.ts';
+import { readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { parsePlanText } from '../../../core/plan/load.ts';
 import { demoJson } from './demoPlans.ts';
+
+/** Version-1 copies of the example plans, kept as they were written by Legwise 0.1. */
+const V1_DIR = fileURLToPath(new URL('../../fixtures/plans-v1/', import.meta.url));
+const V1_FILES = readdirSync(V1_DIR).filter((f) => f.endsWith('.json'));
 
 /** A pretend older format: legs were called `segments` and the version was 0. */
 function asFakeV0(v1: RawPlan): RawPlan {
@@ -17,17 +25,24 @@ const fakeStep0: Migration = (raw) => {
 };
 
 describe('plan migrations', () => {
-  it('version 1 is current and needs no steps', () => {
-    expect(PLAN_SCHEMA_VERSION).toBe(1);
-    expect(Object.keys(MIGRATIONS)).toEqual([]);
+  it('version 2 is current; a current file needs no steps', () => {
+    expect(PLAN_SCHEMA_VERSION).toBe(2);
+    expect(Object.keys(MIGRATIONS)).toEqual(['1']);
     const raw = demoJson('piston-tourer.json');
     expect(migratePlan(raw)).toEqual(raw);
+  });
+
+  it('every version-1 copy of the examples still loads', () => {
+    for (const file of V1_FILES) {
+      const r = parsePlanText(readFileSync(join(V1_DIR, file), 'utf8'));
+      expect(r.ok, file).toBe(true);
+    }
   });
 
   it('an injected v0 → v1 step makes an older file load exactly like its v1 twin', () => {
     const v1 = demoJson('twelve-legs.json');
     const v0 = asFakeV0(v1);
-    const viaStep = parsePlan(v0, { migrations: { 0: fakeStep0 } });
+    const viaStep = parsePlan(v0, { migrations: { ...MIGRATIONS, 0: fakeStep0 } });
     const direct = parsePlan(v1);
     expect(viaStep.ok).toBe(true);
     expect(viaStep.ok && viaStep.plan).toEqual(direct.ok && direct.plan);
@@ -35,7 +50,7 @@ describe('plan migrations', () => {
     const refused = parsePlan(v0);
     expect(refused.ok).toBe(false);
     if (!refused.ok)
-      expect(refused.issues[0]?.message).toBe('schemaVersion: 0 — must be from 1 to 1');
+      expect(refused.issues[0]?.message).toBe('schemaVersion: 0 — must be from 1 to 2');
   });
 
   it('runs the chain in order up to the target and stamps each version', () => {
@@ -57,7 +72,9 @@ describe('plan migrations', () => {
       throw new Error('segments is not a list');
     };
     expect(() => migratePlan({ schemaVersion: 0 }, { 0: broken })).toThrow(InputError);
-    const r = parsePlan(asFakeV0(demoJson('light-jet.json')), { migrations: { 0: broken } });
+    const r = parsePlan(asFakeV0(demoJson('light-jet.json')), {
+      migrations: { ...MIGRATIONS, 0: broken },
+    });
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.issues).toHaveLength(1);

@@ -8,6 +8,7 @@
  */
 import { createRequire } from 'node:module';
 import {
+  PLAN_SCHEMA_VERSION,
   PlanSchema,
   type ClimbLeg,
   type CruiseLeg,
@@ -218,7 +219,7 @@ export function makePlan(kind: Kind, legs: Leg[], o: PlanOptions = {}): Plan {
   const departure = o.departure_m ?? 0;
   return PlanSchema.parse({
     format: 'legwise-plan',
-    schemaVersion: 1,
+    schemaVersion: PLAN_SCHEMA_VERSION,
     name: `test ${kind}`,
     notes: '',
     aircraft: o.aircraft ? o.aircraft(aircraft) : aircraft,
