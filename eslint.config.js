@@ -3,7 +3,17 @@ import tseslint from 'typescript-eslint';
 import vue from 'eslint-plugin-vue';
 
 export default tseslint.config(
-  { ignores: ['node_modules/', 'dist/', 'dist-electron/', 'release/', 'artifacts/', 'coverage/'] },
+  {
+    ignores: [
+      'node_modules/',
+      'dist/',
+      'dist-electron/',
+      'dist-cli/',
+      'release/',
+      'artifacts/',
+      'coverage/',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   ...vue.configs['flat/recommended'],

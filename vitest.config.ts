@@ -9,5 +9,7 @@ export default defineConfig({
     testTimeout: 60_000,
     hookTimeout: 120_000,
     pool: 'forks',
+    // The child-process CLI tests run the bundle; build it from the current sources first.
+    globalSetup: ['test/support/buildCli.setup.ts'],
   },
 });
