@@ -43,6 +43,11 @@ export interface OpenedPlan {
 }
 export interface SavedFile {
   filePath: string;
+  /**
+   * Set when the file had been changed by another program and the person chose to
+   * reload it instead of saving: the page shows this plan (nothing was written).
+   */
+  reloaded?: OpenedPlan;
 }
 export interface RecentFile {
   filePath: string;

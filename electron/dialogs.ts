@@ -5,7 +5,7 @@
  */
 import path from 'node:path';
 import { app, dialog, type BrowserWindow, type FileFilter } from 'electron';
-import type { CloseChoice, SaveKind, ShellPorts } from './document.ts';
+import type { ChangedOnDiskChoice, CloseChoice, SaveKind, ShellPorts } from './document.ts';
 
 const FILTERS: Record<SaveKind, FileFilter[]> = {
   plan: [{ name: 'Legwise plan', extensions: ['json'] }],
@@ -16,8 +16,16 @@ const FILTERS: Record<SaveKind, FileFilter[]> = {
 
 type DialogPorts = Pick<
   ShellPorts,
-  'chooseOpenPath' | 'chooseSavePath' | 'confirmDiscard' | 'askSaveBeforeClose'
+  'chooseOpenPath' | 'chooseSavePath' | 'confirmDiscard' | 'askSaveBeforeClose' | 'askChangedOnDisk'
 >;
+
+/** Button order of the changed-on-disk question; the answer is an index into it. */
+export const CHANGED_ON_DISK_CHOICES: readonly ChangedOnDiskChoice[] = [
+  'saveAs',
+  'overwrite',
+  'reload',
+  'cancel',
+];
 
 export function dialogPorts(getWindow: () => BrowserWindow | null): DialogPorts {
   const parent = () => getWindow() ?? undefined;
@@ -78,6 +86,24 @@ export function dialogPorts(getWindow: () => BrowserWindow | null): DialogPorts 
         ? await dialog.showMessageBox(win, options)
         : await dialog.showMessageBox(options);
       return (['save', 'discard', 'cancel'] as const)[response] ?? 'cancel';
+    },
+    async askChangedOnDisk(fileName): Promise<ChangedOnDiskChoice> {
+      const options = {
+        type: 'warning' as const,
+        buttons: ['Save As…', 'Overwrite', 'Reload from Disk', 'Cancel'],
+        defaultId: 0,
+        cancelId: 3,
+        message: `“${fileName}” was changed by another program since you opened it.`,
+        detail:
+          'Save As keeps both versions. Overwrite replaces it (its current content is kept ' +
+          'as the newest backup, “.bak”). Reload shows the file as it is now and drops ' +
+          'your unsaved changes.',
+      };
+      const win = parent();
+      const { response } = win
+        ? await dialog.showMessageBox(win, options)
+        : await dialog.showMessageBox(options);
+      return CHANGED_ON_DISK_CHOICES[response] ?? 'cancel';
     },
   };
 }

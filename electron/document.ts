@@ -13,26 +13,35 @@ import {
   type Outcome,
   type OpenedPlan,
   type RecentFile,
+  type SavedFile,
 } from './contract.ts';
 import type { MenuCommand } from './channels.ts';
 import {
+  ExternalChangeError,
   addRecent,
   atomicWrite,
+  autosavePaths,
   clearAutosave,
   describeFsError,
+  isRecent,
   readAutosave,
   readPlanFile,
   readRecent,
+  readShellSettings,
   refuseUnloadablePlan,
   removeRecent,
   safeFileName,
   savePlanFile,
   writeAutosave,
+  type FileStamp,
   type WriteOps,
 } from './files.ts';
+import { removeStaleTemps } from './atomicWrite.ts';
 
 export type SaveKind = 'plan' | 'pdf' | 'csv' | 'gpx';
 export type CloseChoice = 'save' | 'discard' | 'cancel';
+/** What to do when the file was changed by another program since it was opened. */
+export type ChangedOnDiskChoice = 'overwrite' | 'saveAs' | 'reload' | 'cancel';
 
 /** What the document needs from Electron; main.ts supplies dialogs and the window. */
 export interface ShellPorts {
@@ -43,6 +52,8 @@ export interface ShellPorts {
   confirmDiscard(): Promise<boolean>;
   /** "Save changes before closing?" */
   askSaveBeforeClose(planName: string): Promise<CloseChoice>;
+  /** "Another program changed <file> since you opened it": overwrite, save as, reload? */
+  askChangedOnDisk(fileName: string): Promise<ChangedOnDiskChoice>;
   printPdf(): Promise<Uint8Array>;
   showTitle(name: string, dirty: boolean, filePath: string | null): void;
   recentChanged(files: RecentFile[]): void;
@@ -70,6 +81,8 @@ export interface DocumentState {
   name: string;
   dirty: boolean;
   closeAfterSave: boolean;
+  /** What `filePath` held when it was opened or last saved; checked before each save. */
+  stamp: FileStamp | null;
 }
 
 export function createDocument(ports: ShellPorts) {
@@ -79,6 +92,7 @@ export function createDocument(ports: ShellPorts) {
     name: UNTITLED,
     dirty: false,
     closeAfterSave: false,
+    stamp: null,
   };
   const recentStore = recentStorePath(ports.userDataDir);
 
@@ -92,35 +106,75 @@ export function createDocument(ports: ShellPorts) {
   async function openPath(filePath: string): Promise<Outcome<OpenedPlan>> {
     const loaded = await readPlanFile(filePath);
     if (!loaded.ok) return loaded;
-    Object.assign(state, { filePath, suggestedPath: null, name: loaded.plan.name, dirty: false });
+    Object.assign(state, {
+      filePath,
+      suggestedPath: null,
+      name: loaded.plan.name,
+      dirty: false,
+      stamp: loaded.stamp,
+    });
     showTitle();
     publishRecent(await addRecent(recentStore, filePath));
     return { ok: true, plan: loaded.plan, warnings: loaded.warnings, filePath };
   }
 
-  async function writePlan(filePath: string, plan: Plan): Promise<Outcome<{ filePath: string }>> {
+  /** Another program changed the file: ask, and lose neither version. */
+  async function resolveChangedOnDisk(filePath: string, plan: Plan): Promise<Outcome<SavedFile>> {
+    const choice = await ports.askChangedOnDisk(path.basename(filePath));
+    if (choice === 'overwrite') return writePlan(filePath, plan, { force: true });
+    if (choice === 'saveAs') return saveAs(plan);
+    if (choice === 'reload') {
+      state.closeAfterSave = false;
+      const reloaded = await openPath(filePath);
+      if (!reloaded.ok) return reloaded;
+      return { ok: true, filePath, reloaded };
+    }
+    state.closeAfterSave = false;
+    return failure(
+      'CANCELLED',
+      `Not saved: ${path.basename(filePath)} was changed by another program.`,
+    );
+  }
+
+  async function writePlan(
+    filePath: string,
+    plan: Plan,
+    how: { force?: boolean } = {},
+  ): Promise<Outcome<SavedFile>> {
     const refused = refuseUnloadablePlan(plan);
     if (refused) {
       state.closeAfterSave = false;
       return refused;
     }
+    // Only the file this document came from is checked; a file chosen in Save As was
+    // already confirmed for replacing by the save dialog.
+    const sameFile =
+      state.filePath !== null && path.resolve(state.filePath) === path.resolve(filePath);
+    const expect = sameFile && !how.force && state.stamp !== null ? state.stamp : undefined;
+    let stamp: FileStamp;
     try {
-      await savePlanFile(filePath, plan, ports.writeOps);
+      const { backupGenerations } = await readShellSettings(ports.userDataDir);
+      stamp = await savePlanFile(filePath, plan, {
+        generations: backupGenerations,
+        ...(expect ? { expect } : {}),
+        ...(ports.writeOps ? { ops: ports.writeOps } : {}),
+      });
     } catch (error) {
+      if (error instanceof ExternalChangeError) return resolveChangedOnDisk(filePath, plan);
       state.closeAfterSave = false;
       return failure(
         'WRITE_FAILED',
         `Could not save ${path.basename(filePath)}: ${describeFsError(error)}.`,
       );
     }
-    Object.assign(state, { filePath, suggestedPath: null, name: plan.name, dirty: false });
+    Object.assign(state, { filePath, suggestedPath: null, name: plan.name, dirty: false, stamp });
     showTitle();
     publishRecent(await addRecent(recentStore, filePath));
     if (state.closeAfterSave) ports.closeWindow();
     return { ok: true, filePath };
   }
 
-  async function saveAs(plan: Plan): Promise<Outcome<{ filePath: string }>> {
+  async function saveAs(plan: Plan): Promise<Outcome<SavedFile>> {
     const refused = refuseUnloadablePlan(plan);
     if (refused) {
       state.closeAfterSave = false;
@@ -161,7 +215,13 @@ export function createDocument(ports: ShellPorts) {
   const handlers: Handlers = {
     async newPlan() {
       if (!(await mayDiscard())) return failure('CANCELLED', 'Kept the current plan.');
-      Object.assign(state, { filePath: null, suggestedPath: null, name: UNTITLED, dirty: false });
+      Object.assign(state, {
+        filePath: null,
+        suggestedPath: null,
+        name: UNTITLED,
+        dirty: false,
+        stamp: null,
+      });
       showTitle();
       return { ok: true };
     },
@@ -171,6 +231,9 @@ export function createDocument(ports: ShellPorts) {
       return filePath === null ? failure('CANCELLED', 'Open cancelled.') : openPath(filePath);
     },
     async openRecent(filePath) {
+      // Only a path the shell itself put on the list: the page cannot name other files.
+      if (!(await isRecent(recentStore, filePath)))
+        return failure('FORBIDDEN', `${path.basename(filePath)} is not in the recent list.`);
       if (!existsSync(filePath)) {
         publishRecent(await removeRecent(recentStore, filePath));
         return failure(
@@ -237,8 +300,22 @@ export function createDocument(ports: ShellPorts) {
     await clearAutosave(ports.userDataDir);
   }
 
+  /**
+   * On start: temporary files a crashed writer of ours left in the app-data folders and
+   * beside the recent plans (each carries its writer's pid; only dead writers' go).
+   */
+  async function removeOrphanTemps(): Promise<string[]> {
+    const recent = await readRecent(recentStore);
+    return removeStaleTemps([
+      ports.userDataDir,
+      autosavePaths(ports.userDataDir).dir,
+      ...recent.map((p) => path.dirname(p)),
+    ]);
+  }
+
   return {
     handlers,
+    removeOrphanTemps,
     state: state as Readonly<DocumentState>,
     onCloseRequested,
     onClosed,

@@ -1,96 +1,37 @@
 /**
- * The shell's file service in plain Node (no Electron): atomic writes with a kept
- * backup, plan files through the core loader, the recent-files list, and the
- * crash-insurance autosave. Every path comes in as an argument, so tests run it
- * against a temporary folder.
- *
- * Atomic write (common practice for crash-safe saves, cf. POSIX rename(2)): write a
- * temporary file in the target's folder, fsync it, then rename it over the target, so
- * a crash leaves either the old file or the new one, never a torn one.
+ * The shell's file service in plain Node (no Electron): plan files through the core
+ * loader with the stamp of what was read (so a save can tell whether another program
+ * changed the file since), the recent-files list, the crash-insurance autosave (one
+ * file, written atomically) and the shell's own small settings. Writes go through
+ * atomicWrite.ts. Every path comes in as an argument, so tests run it against a
+ * temporary folder.
  */
 import { existsSync, promises as fsp } from 'node:fs';
 import path from 'node:path';
-import { randomBytes } from 'node:crypto';
 import { z } from 'zod';
 import type { Plan } from '../core/plan/schema.ts';
 import { parsePlan, parsePlanText, serializePlan } from '../core/plan/load.ts';
 import { failure, type Failure, type RecoveredPlan } from './contract.ts';
+import {
+  MAX_BACKUP_GENERATIONS,
+  atomicWrite,
+  errnoOf,
+  readWithStamp,
+  type FileStamp,
+  type WriteOps,
+} from './atomicWrite.ts';
 
-/** Injection point for tests: a rename that fails simulates a crash before the swap. */
-export interface WriteOps {
-  rename: (from: string, to: string) => Promise<void>;
-}
-
-export interface AtomicWriteOptions {
-  /** Keep the file being replaced as `<target>.bak`. */
-  backup?: boolean;
-  ops?: Partial<WriteOps>;
-}
+export {
+  ExternalChangeError,
+  atomicWrite,
+  backupPathOf,
+  type FileStamp,
+  type WriteOps,
+} from './atomicWrite.ts';
 
 export const MAX_PLAN_FILE_BYTES = 10 * 1024 * 1024;
 export const MAX_RECENT = 10;
-
-export function backupPathOf(target: string): string {
-  return `${target}.bak`;
-}
-
-export async function atomicWrite(
-  target: string,
-  data: string | Uint8Array,
-  options: AtomicWriteOptions = {},
-): Promise<void> {
-  const dir = path.dirname(target);
-  const tmp = path.join(
-    dir,
-    `.${path.basename(target)}.${process.pid}.${randomBytes(6).toString('hex')}.tmp`,
-  );
-  const rename = options.ops?.rename ?? fsp.rename;
-  let handle: fsp.FileHandle | undefined;
-  try {
-    handle = await fsp.open(tmp, 'wx');
-    await handle.writeFile(data);
-    await handle.sync();
-    await handle.close();
-    handle = undefined;
-    if (options.backup) await keepBackup(target);
-    await rename(tmp, target);
-  } catch (error) {
-    await handle?.close().catch(() => undefined);
-    await fsp.rm(tmp, { force: true }).catch(() => undefined);
-    throw error;
-  }
-  await syncDirectory(dir);
-}
-
-/** The backup is itself written atomically, so it is never a torn copy. */
-async function keepBackup(target: string): Promise<void> {
-  let previous: Buffer;
-  try {
-    previous = await fsp.readFile(target);
-  } catch (error) {
-    if (errnoOf(error) === 'ENOENT') return;
-    throw error;
-  }
-  await atomicWrite(backupPathOf(target), previous);
-}
-
-/** Makes the rename itself durable where the OS allows opening a folder (not Windows). */
-async function syncDirectory(dir: string): Promise<void> {
-  let handle: fsp.FileHandle | undefined;
-  try {
-    handle = await fsp.open(dir, 'r');
-    await handle.sync();
-  } catch {
-    // Best effort only: some platforms and file systems refuse fsync on folders.
-  } finally {
-    await handle?.close().catch(() => undefined);
-  }
-}
-
-function errnoOf(error: unknown): string | undefined {
-  const code = (error as { code?: unknown } | null)?.code;
-  return typeof code === 'string' ? code : undefined;
-}
+export const DEFAULT_BACKUP_GENERATIONS = 3;
 
 const ERRNO_WORDS: Record<string, string> = {
   ENOENT: 'the file does not exist',
@@ -108,12 +49,18 @@ export function describeFsError(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
-export type ReadPlanResult = { ok: true; plan: Plan; warnings: string[] } | Failure;
+export type ReadPlanResult =
+  { ok: true; plan: Plan; warnings: string[]; changes: string[]; stamp: FileStamp } | Failure;
 
-/** Reads and validates a plan file; a bad file yields the loader's path-named issues. */
+/**
+ * Reads and validates a plan file; a bad file yields the loader's path-named issues.
+ * `stamp` (mtime, size, SHA-256 of the bytes read) lets a later save notice another
+ * program's edit.
+ */
 export async function readPlanFile(filePath: string): Promise<ReadPlanResult> {
   const name = path.basename(filePath);
   let text: string;
+  let stamp: FileStamp;
   try {
     const stat = await fsp.stat(filePath);
     if (stat.isDirectory())
@@ -124,12 +71,21 @@ export async function readPlanFile(filePath: string): Promise<ReadPlanResult> {
         `Could not open ${name}: it is larger than ${MAX_PLAN_FILE_BYTES} bytes.`,
       );
     }
-    text = await fsp.readFile(filePath, 'utf8');
+    const read = await readWithStamp(filePath);
+    text = read.bytes.toString('utf8');
+    stamp = read.stamp;
   } catch (error) {
     return failure('READ_FAILED', `Could not open ${name}: ${describeFsError(error)}.`);
   }
   const loaded = parsePlanText(text);
-  if (loaded.ok) return { ok: true, plan: loaded.plan, warnings: loaded.warnings };
+  if (loaded.ok)
+    return {
+      ok: true,
+      plan: loaded.plan,
+      warnings: loaded.warnings,
+      changes: loaded.changes,
+      stamp,
+    };
   const first = loaded.issues[0]?.message ?? 'unknown problem';
   const more = loaded.issues.length > 1 ? ` (and ${loaded.issues.length - 1} more)` : '';
   return failure(
@@ -150,13 +106,35 @@ export function refuseUnloadablePlan(plan: Plan): Failure | null {
   return failure('INVALID_PLAN', `The plan cannot be saved yet: ${first}`, loaded.issues);
 }
 
-/** Saves a plan atomically, keeping the replaced version as `<file>.bak`. */
+export interface SavePlanOptions {
+  ops?: Partial<WriteOps>;
+  /** Backups to keep (default DEFAULT_BACKUP_GENERATIONS). */
+  generations?: number;
+  /** The stamp of the file as opened: the save is refused if the file no longer matches. */
+  expect?: FileStamp | null;
+}
+
+/**
+ * Saves a plan atomically with rotating backups (`<file>.bak` newest). Returns the stamp
+ * of what was written, the base for the next save's check. Throws ExternalChangeError
+ * when `expect` is given and the file on disk differs.
+ */
 export async function savePlanFile(
   filePath: string,
   plan: Plan,
-  ops?: Partial<WriteOps>,
-): Promise<void> {
-  await atomicWrite(filePath, serializePlan(plan), { backup: true, ...(ops ? { ops } : {}) });
+  options: SavePlanOptions | Partial<WriteOps> = {},
+): Promise<FileStamp> {
+  const o: SavePlanOptions =
+    'rename' in options || 'beforeSwap' in options
+      ? { ops: options as Partial<WriteOps> }
+      : (options as SavePlanOptions);
+  const text = serializePlan(plan);
+  await atomicWrite(filePath, text, {
+    generations: o.generations ?? DEFAULT_BACKUP_GENERATIONS,
+    ...(o.expect !== undefined ? { expect: o.expect } : {}),
+    ...(o.ops ? { ops: o.ops } : {}),
+  });
+  return (await readWithStamp(filePath)).stamp;
 }
 
 /** A file name from a free-text title: no folders, no characters Windows refuses. */
@@ -195,6 +173,12 @@ export async function readRecent(
   return parsed.success ? parsed.data.filter((p) => exists(p)).slice(0, MAX_RECENT) : [];
 }
 
+/** Whether `filePath` is in the stored list (existing or not): openRecent accepts only these. */
+export async function isRecent(storePath: string, filePath: string): Promise<boolean> {
+  const resolved = path.resolve(filePath);
+  return (await readRecent(storePath, () => true)).some((p) => path.resolve(p) === resolved);
+}
+
 async function writeRecent(storePath: string, list: string[]): Promise<void> {
   await fsp.mkdir(path.dirname(storePath), { recursive: true });
   await atomicWrite(storePath, `${JSON.stringify(list, null, 2)}\n`);
@@ -213,20 +197,33 @@ export async function removeRecent(storePath: string, filePath: string): Promise
   return list;
 }
 
-// ---- Autosave: `<userData>/autosave/current.legwise.json` (+ where it came from). ----
+// ---- Autosave: ONE file, `<userData>/autosave/current.autosave.json`. ----
+// The plan and where it came from travel together in one atomic write, so a crash can
+// never leave a plan paired with another plan's origin.
 
-export function autosavePaths(userDataDir: string): { dir: string; plan: string; meta: string } {
+export const AUTOSAVE_FORMAT = 'legwise-autosave';
+
+export function autosavePaths(userDataDir: string): { dir: string; file: string } {
   const dir = path.join(userDataDir, 'autosave');
-  return {
-    dir,
-    plan: path.join(dir, 'current.legwise.json'),
-    meta: path.join(dir, 'current.meta.json'),
-  };
+  return { dir, file: path.join(dir, 'current.autosave.json') };
 }
 
-const AutosaveMetaSchema = z.object({ sourcePath: z.string().min(1).max(4096).nullable() });
+/** The two files earlier versions wrote; removed when the autosave is cleared. */
+function legacyAutosaveFiles(dir: string): string[] {
+  return [path.join(dir, 'current.legwise.json'), path.join(dir, 'current.meta.json')];
+}
 
-/** The plan file itself is an ordinary plan file, so a person can also open it by hand. */
+const AutosaveSchema = z.object({
+  format: z.literal(AUTOSAVE_FORMAT),
+  sourcePath: z.string().min(1).max(4096).nullable(),
+  plan: z.unknown(),
+});
+
+export function autosaveText(plan: Plan, sourcePath: string | null): string {
+  const wrapped = { format: AUTOSAVE_FORMAT, sourcePath, plan: JSON.parse(serializePlan(plan)) };
+  return `${JSON.stringify(wrapped, null, 2)}\n`;
+}
+
 export async function writeAutosave(
   userDataDir: string,
   plan: Plan,
@@ -234,28 +231,67 @@ export async function writeAutosave(
 ): Promise<void> {
   const paths = autosavePaths(userDataDir);
   await fsp.mkdir(paths.dir, { recursive: true });
-  await atomicWrite(paths.meta, JSON.stringify({ sourcePath }));
-  await atomicWrite(paths.plan, serializePlan(plan));
+  await atomicWrite(paths.file, autosaveText(plan, sourcePath));
 }
 
 /** The autosaved plan, or null if there is none (or it no longer loads). */
 export async function readAutosave(userDataDir: string): Promise<RecoveredPlan | null> {
   const paths = autosavePaths(userDataDir);
-  if (!existsSync(paths.plan)) return null;
-  const loaded = await readPlanFile(paths.plan);
-  if (!loaded.ok) return null;
-  let sourcePath: string | null = null;
+  let raw: unknown;
   try {
-    const meta = AutosaveMetaSchema.safeParse(JSON.parse(await fsp.readFile(paths.meta, 'utf8')));
-    if (meta.success) sourcePath = meta.data.sourcePath;
+    const stat = await fsp.stat(paths.file);
+    if (stat.size > MAX_PLAN_FILE_BYTES) return null;
+    raw = JSON.parse(await fsp.readFile(paths.file, 'utf8'));
   } catch {
-    // No or damaged metadata: the plan is still worth offering, as never saved.
+    return null;
   }
-  return { plan: loaded.plan, warnings: loaded.warnings, sourcePath };
+  const wrapped = AutosaveSchema.safeParse(raw);
+  if (!wrapped.success) return null;
+  const loaded = parsePlan(wrapped.data.plan);
+  if (!loaded.ok) return null;
+  return { plan: loaded.plan, warnings: loaded.warnings, sourcePath: wrapped.data.sourcePath };
 }
 
 export async function clearAutosave(userDataDir: string): Promise<void> {
   const paths = autosavePaths(userDataDir);
-  await fsp.rm(paths.plan, { force: true });
-  await fsp.rm(paths.meta, { force: true });
+  for (const file of [paths.file, ...legacyAutosaveFiles(paths.dir)])
+    await fsp.rm(file, { force: true });
+}
+
+// ---- The shell's own settings: `<userData>/shell-settings.json`. ----
+
+export const ShellSettingsSchema = z.object({
+  /** How many earlier versions of a plan are kept beside it (`.bak`, `.bak2` …). */
+  backupGenerations: z
+    .number()
+    .int()
+    .min(0)
+    .max(MAX_BACKUP_GENERATIONS)
+    .default(DEFAULT_BACKUP_GENERATIONS),
+});
+export type ShellSettings = z.infer<typeof ShellSettingsSchema>;
+
+export function shellSettingsPath(userDataDir: string): string {
+  return path.join(userDataDir, 'shell-settings.json');
+}
+
+/** The stored settings; a missing or damaged file reads as the defaults. */
+export async function readShellSettings(userDataDir: string): Promise<ShellSettings> {
+  try {
+    const raw: unknown = JSON.parse(await fsp.readFile(shellSettingsPath(userDataDir), 'utf8'));
+    const parsed = ShellSettingsSchema.safeParse(raw);
+    if (parsed.success) return parsed.data;
+  } catch {
+    // fall through to the defaults
+  }
+  return ShellSettingsSchema.parse({});
+}
+
+export async function writeShellSettings(
+  userDataDir: string,
+  settings: ShellSettings,
+): Promise<void> {
+  const valid = ShellSettingsSchema.parse(settings);
+  await fsp.mkdir(userDataDir, { recursive: true });
+  await atomicWrite(shellSettingsPath(userDataDir), `${JSON.stringify(valid, null, 2)}\n`);
 }

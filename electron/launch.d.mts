@@ -15,11 +15,17 @@ export function hasDisplay(options?: { platform?: NodeJS.Platform; env?: Env }):
 export function launchDecision(
   probe: Probe & { platform?: NodeJS.Platform },
 ): { mode: 'electron'; binary: string } | { mode: 'browser'; reason: string };
+export function ensureBuilt(options: {
+  root: string;
+  configFile?: string | false;
+  log?: (line: string) => void;
+}): Promise<boolean>;
 export function serveRenderer(options: {
   root: string;
   configFile?: string | false;
   port?: number;
-}): Promise<{ url: string; kind: 'preview' | 'dev'; close: () => Promise<void> }>;
+  log?: (line: string) => void;
+}): Promise<{ url: string; kind: 'preview'; built: boolean; close: () => Promise<void> }>;
 export function viteProject(
   root: string,
   configFile?: string | false,

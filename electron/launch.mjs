@@ -98,26 +98,35 @@ export function viteProject(root, configFile) {
   return found ? { configFile: found } : { root, configFile: false };
 }
 
-/**
- * Serves the planner on 127.0.0.1: the built UI with `vite preview` if dist/index.html
- * exists, else the Vite dev server. Resolves to { url, kind, close }.
- */
-export async function serveRenderer({ root, configFile, port } = {}) {
+/** Builds the planner into dist/ (vite build) when dist/index.html is missing. */
+export async function ensureBuilt({ root, configFile, log = () => undefined } = {}) {
+  if (fs.existsSync(path.join(root, 'dist', 'index.html'))) return false;
+  log('Building the planner UI (dist/) …');
   const vite = await import('vite');
-  const common = { ...viteProject(root, configFile), logLevel: 'warn' };
+  await vite.build({ ...viteProject(root, configFile), logLevel: 'warn' });
+  return true;
+}
+
+/**
+ * Serves the built planner (dist/) on 127.0.0.1 with `vite preview`, building it first
+ * if needed. Never the Vite dev server: that serves the whole project folder and an
+ * open-in-editor endpoint. Resolves to { url, kind: 'preview', built, close }.
+ */
+export async function serveRenderer({ root, configFile, port, log } = {}) {
+  const built = await ensureBuilt({ root, configFile, log });
+  const vite = await import('vite');
   const listen = {
     host: '127.0.0.1',
     strictPort: false,
     open: false,
     ...(port === undefined ? {} : { port }),
   };
-  if (fs.existsSync(path.join(root, 'dist', 'index.html'))) {
-    const server = await vite.preview({ ...common, preview: listen });
-    return { url: firstLocalUrl(server), kind: 'preview', close: () => server.close() };
-  }
-  const server = await vite.createServer({ ...common, server: listen });
-  await server.listen();
-  return { url: firstLocalUrl(server), kind: 'dev', close: () => server.close() };
+  const server = await vite.preview({
+    ...viteProject(root, configFile),
+    logLevel: 'warn',
+    preview: listen,
+  });
+  return { url: firstLocalUrl(server), kind: 'preview', built, close: () => server.close() };
 }
 
 /** The environment for the Electron child: never "run as node". */

@@ -81,6 +81,7 @@ async function start(): Promise<void> {
     Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   }
 
+  await doc.removeOrphanTemps().catch(() => undefined);
   registerIpc(ipcMain, doc.handlers, { indexUrl: pathToFileURL(indexFile).href, devServerUrl });
   setMenu(toRecentFiles(await doc.listRecent()));
 

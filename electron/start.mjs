@@ -6,23 +6,22 @@
  */
 import console from 'node:console';
 import process from 'node:process';
-import fs from 'node:fs';
 import path from 'node:path';
 import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import {
   electronChildEnv,
+  ensureBuilt,
   fallbackLine,
   launchDecision,
   resolveElectronDir,
   serveRenderer,
-  viteProject,
 } from './launch.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
 async function serveInBrowser() {
-  const server = await serveRenderer({ root });
+  const server = await serveRenderer({ root, log: (line) => console.log(line) });
   console.log(fallbackLine(server.url));
   const stop = () => void server.close().finally(() => process.exit(0));
   process.once('SIGINT', stop);
@@ -30,11 +29,7 @@ async function serveInBrowser() {
 }
 
 async function runDesktop(binary) {
-  if (!fs.existsSync(path.join(root, 'dist', 'index.html'))) {
-    console.log('Building the planner UI (dist/) …');
-    const { build } = await import('vite');
-    await build({ ...viteProject(root), logLevel: 'warn' });
-  }
+  await ensureBuilt({ root, log: (line) => console.log(line) });
   const { buildElectron } = await import('./build.mjs');
   await buildElectron({ root });
   const child = spawn(binary, [root], { stdio: 'inherit', env: electronChildEnv() });

@@ -4,7 +4,12 @@ import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { newPlan } from '../../core/plan/defaults.ts';
 import { serializePlan } from '../../core/plan/load.ts';
-import { createDocument, recentStorePath, type ShellPorts } from '../../electron/document.ts';
+import {
+  createDocument,
+  recentStorePath,
+  type ChangedOnDiskChoice,
+  type ShellPorts,
+} from '../../electron/document.ts';
 import { autosavePaths, readAutosave, writeAutosave } from '../../electron/files.ts';
 
 let dir: string;
@@ -22,6 +27,7 @@ function ports(overrides: Partial<ShellPorts> = {}) {
     chooseSavePath: vi.fn(async (): Promise<string | null> => null),
     confirmDiscard: vi.fn(async () => true),
     askSaveBeforeClose: vi.fn(async () => 'cancel' as const),
+    askChangedOnDisk: vi.fn(async (): Promise<ChangedOnDiskChoice> => 'cancel'),
     printPdf: vi.fn(async () => new Uint8Array([0x25, 0x50, 0x44, 0x46])),
     showTitle: vi.fn(),
     recentChanged: vi.fn(),
@@ -146,6 +152,24 @@ describe('opening', () => {
     expect(doc.state.dirty).toBe(true);
   });
 
+  it('openRecent refuses a path the shell never put on the recent list', async () => {
+    const elsewhere = path.join(dir, 'elsewhere.legwise');
+    await fsp.writeFile(elsewhere, serializePlan(planNamed('Not recent')));
+    const listed = path.join(dir, 'listed.legwise');
+    await fsp.writeFile(listed, serializePlan(planNamed('Listed')));
+    await fsp.mkdir(path.join(dir, 'userData'), { recursive: true });
+    await fsp.writeFile(recentStorePath(path.join(dir, 'userData')), JSON.stringify([listed]));
+    const doc = createDocument(ports());
+    expect(await doc.handlers.openRecent(elsewhere)).toMatchObject({
+      ok: false,
+      code: 'FORBIDDEN',
+      message: 'elsewhere.legwise is not in the recent list.',
+    });
+    expect(doc.state.filePath).toBeNull();
+    const opened = await doc.handlers.openRecent(listed);
+    expect(opened.ok && opened.plan.name).toBe('Listed');
+  });
+
   it('a recent file that has gone is reported and dropped from the list', async () => {
     const gone = path.join(dir, 'gone.legwise.json');
     await fsp.mkdir(path.join(dir, 'userData'), { recursive: true });
@@ -197,7 +221,7 @@ describe('title, close prompt and autosave', () => {
     const offered = await second.handlers.recoverAutosave();
     expect(offered.ok && offered.recovered?.plan.name).toBe('Crash test');
     await second.onClosed();
-    await expect(fsp.access(autosavePaths(userData).plan)).rejects.toThrow();
+    await expect(fsp.access(autosavePaths(userData).file)).rejects.toThrow();
     expect(await second.handlers.recoverAutosave()).toEqual({ ok: true, recovered: null });
   });
 

@@ -167,7 +167,8 @@ describe('autosave', () => {
     const plan = { ...newPlan(), name: 'Unsaved work' };
     expect(await readAutosave(dir)).toBeNull();
     await writeAutosave(dir, plan, '/plans/origin.legwise.json');
-    expect(path.basename(autosavePaths(dir).plan)).toBe('current.legwise.json');
+    // One file holds the plan and its origin (see saveSafety.test.ts for the kill test).
+    expect(await fsp.readdir(autosavePaths(dir).dir)).toEqual(['current.autosave.json']);
     const recovered = await readAutosave(dir);
     expect(recovered?.plan.name).toBe('Unsaved work');
     expect(recovered?.sourcePath).toBe('/plans/origin.legwise.json');
@@ -176,10 +177,11 @@ describe('autosave', () => {
     expect(await readAutosave(dir)).toBeNull();
   });
 
-  it('offers a plan whose origin note is missing as never saved', async () => {
+  it('offers a plan never saved with no origin, and ignores a damaged autosave', async () => {
     await writeAutosave(dir, newPlan(), null);
-    await fsp.rm(autosavePaths(dir).meta);
     expect((await readAutosave(dir))?.sourcePath).toBeNull();
+    await fsp.writeFile(autosavePaths(dir).file, '{"format": "legwise-autosave", "plan": 3}');
+    expect(await readAutosave(dir)).toBeNull();
   });
 });
 

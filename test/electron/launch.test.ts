@@ -127,12 +127,19 @@ describe('serving the planner in the browser', () => {
     }
   });
 
-  it('falls back to the dev server when nothing is built', async () => {
+  it('never serves the dev server: with nothing built it builds dist/ first', async () => {
     await fsp.writeFile(path.join(dir, 'index.html'), '<!doctype html><title>source page</title>');
-    const server = await serveRenderer({ root: dir, configFile: false });
+    const lines: string[] = [];
+    const server = await serveRenderer({ root: dir, configFile: false, log: (l) => lines.push(l) });
     try {
-      expect(server.kind).toBe('dev');
-      expect(await (await fetch(`${server.url}/`)).text()).toContain('source page');
+      expect(server.kind).toBe('preview');
+      expect(server.built).toBe(true);
+      expect(lines).toEqual(['Building the planner UI (dist/) …']);
+      await fsp.access(path.join(dir, 'dist', 'index.html'));
+      const page = await (await fetch(`${server.url}/`)).text();
+      expect(page).toContain('source page');
+      // The dev server would inject its client script into every page (Vite docs, HMR).
+      expect(page).not.toContain('/@vite/client');
     } finally {
       await server.close();
     }
@@ -151,8 +158,10 @@ describe('serving the planner in the browser', () => {
       const line = await new Promise<string>((resolve, reject) => {
         child.stdout.on('data', (chunk: Buffer) => {
           stdout += chunk.toString();
-          const first = stdout.split('\n')[0];
-          if (stdout.includes('\n') && first !== undefined) resolve(first);
+          // A build line may come first when dist/ is missing; then the one fallback line.
+          const lines = stdout.split('\n').filter((l) => !l.startsWith('Building the planner'));
+          const first = lines[0];
+          if (lines.length > 1 && first !== undefined) resolve(first);
         });
         child.once('exit', (code) => reject(new Error(`start.mjs exited (${code}): ${stderr}`)));
       });

@@ -81,7 +81,7 @@ describe('electron/main.ts', () => {
     await invoke('setDirty', { dirty: true, name: 'Coast run' });
     expect(win.title).toBe('• Coast run — Legwise');
     await invoke('autosave', newPlan());
-    await fsp.access(autosavePaths(app.userData).plan);
+    await fsp.access(autosavePaths(app.userData).file);
 
     dialog.showMessageBox.mockResolvedValueOnce({ response: 2, checkboxChecked: false }); // Cancel
     win.close();
@@ -92,6 +92,6 @@ describe('electron/main.ts', () => {
     win.close();
     await vi.waitFor(() => expect(win.destroyed).toBe(true));
     // Closing on purpose is a clean exit: the autosave goes.
-    await expect(fsp.access(autosavePaths(app.userData).plan)).rejects.toThrow();
+    await expect(fsp.access(autosavePaths(app.userData).file)).rejects.toThrow();
   });
 });

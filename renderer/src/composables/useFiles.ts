@@ -119,7 +119,10 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     if (!p) return;
     if (api) {
       const r = as ? await api.savePlanAs(p) : await api.savePlan(p);
-      if (r.ok) {
+      if (r.ok && r.reloaded) {
+        opened(r.reloaded.plan, r.reloaded.filePath);
+        status.value = `Reloaded ${r.filePath} as another program left it; nothing was saved.`;
+      } else if (r.ok) {
         plan.markSaved();
         status.value = `Saved to ${r.filePath}.`;
       } else if (r.code !== 'CANCELLED') status.value = r.message;
