@@ -5,7 +5,14 @@
  * value and the limit; nothing here throws for any input text.
  */
 import { InputError } from '../errors.ts';
-import { cleanJsonMessage, jsonErrorOffset, lineColumn } from './jsonError.ts';
+import { decodePlanBytes } from './decode.ts';
+import {
+  cleanJsonMessage,
+  duplicateKey,
+  excerptAt,
+  jsonErrorOffset,
+  lineColumn,
+} from './jsonError.ts';
 import {
   describeValue,
   issue,
@@ -49,13 +56,27 @@ function refuse(issues: PlanIssue[]): LoadResult {
   };
 }
 
+/** The refusal for a file of `size` bytes or characters above MAX_PLAN_TEXT_LENGTH. */
+export function tooLargeIssue(size: number): PlanIssue {
+  const mb = (size / (1024 * 1024)).toFixed(1);
+  return issue('file', `${mb} MB is too large — a plan file may be at most 5 MB`);
+}
+
+/**
+ * Parses the bytes of a plan file: UTF-8 only (decode.ts says what is refused and why),
+ * the size checked before anything is decoded.
+ */
+export function parsePlanBytes(bytes: Uint8Array, options: LoadOptions = {}): LoadResult {
+  if (bytes.length > MAX_PLAN_TEXT_LENGTH) return refuse([tooLargeIssue(bytes.length)]);
+  const decoded = decodePlanBytes(bytes);
+  if (!decoded.ok) return refuse([issue('file', decoded.message)]);
+  return parsePlanText(decoded.text, options);
+}
+
 /** Parses the text of a plan file. */
 export function parsePlanText(text: string, options: LoadOptions = {}): LoadResult {
   if (typeof text !== 'string') return refuse([issue('file', 'expected the text of a plan file')]);
-  if (text.length > MAX_PLAN_TEXT_LENGTH) {
-    const mb = (text.length / (1024 * 1024)).toFixed(1);
-    return refuse([issue('file', `${mb} MB is too large — a plan file may be at most 5 MB`)]);
-  }
+  if (text.length > MAX_PLAN_TEXT_LENGTH) return refuse([tooLargeIssue(text.length)]);
   // Some editors write a byte-order mark; JSON itself does not allow one.
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   let data: unknown;
@@ -65,7 +86,22 @@ export function parsePlanText(text: string, options: LoadOptions = {}): LoadResu
     const offset = jsonErrorOffset(body);
     const { line, column } = lineColumn(body, offset < 0 ? 0 : offset);
     const why = cleanJsonMessage(err instanceof Error ? err.message : String(err));
-    return refuse([issue('file', `not valid JSON at line ${line}, column ${column} (${why})`)]);
+    const near = excerptAt(body, offset < 0 ? 0 : offset);
+    const shown = near === '' ? '' : ` near: ${near}`;
+    return refuse([
+      issue('file', `not valid JSON at line ${line}, column ${column} (${why})${shown}`),
+    ]);
+  }
+  const twice = duplicateKey(body);
+  if (twice !== undefined) {
+    const a = lineColumn(body, twice.first);
+    const b = lineColumn(body, twice.again);
+    return refuse([
+      issue(
+        twice.path,
+        `given twice (line ${a.line}, column ${a.column} and line ${b.line}, column ${b.column}) — each key may appear once, so it is clear which value counts`,
+      ),
+    ]);
   }
   return parsePlan(data, options);
 }

@@ -195,7 +195,7 @@ describe('bad plan files are refused with path-named messages', () => {
   it('broken JSON names line and column', () => {
     const text = '{\n  "format": "legwise-plan",\n  "name": "x",\n  }\n';
     expect(issuesOf(parsePlanText(text))[0]?.message).toMatch(
-      /^file: not valid JSON at line 4, column 3 \(.+\)$/,
+      /^file: not valid JSON at line 4, column 3 \(.+\) near: {3}}$/,
     );
     const truncated = demoText('piston-tourer.json').slice(0, 100);
     const lines = truncated.split('\n');
@@ -204,7 +204,7 @@ describe('bad plan files are refused with path-named messages', () => {
       `at line ${lines.length}, column ${(lines.at(-1)?.length ?? 0) + 1}`,
     );
     expect(issuesOf(parsePlanText('{"a": tru}'))[0]?.message).toBe(
-      "file: not valid JSON at line 1, column 10 (Unexpected token '}')",
+      'file: not valid JSON at line 1, column 10 (Unexpected token \'}\') near: {"a": tru}',
     );
     expect(issuesOf(parsePlanText(''))[0]?.message).toMatch(
       /^file: not valid JSON at line 1, column 1 /,
