@@ -7,15 +7,24 @@
 import { formatQuantity } from '../core/format.ts';
 import type { Plan } from '../core/plan/schema.ts';
 import {
-  reserveMonteCarlo,
+  createReserveRun,
   type ReserveMonteCarloResult,
 } from '../core/uncertainty/reserveMonteCarlo.ts';
 import { monteCarloSetup } from '../core/uncertainty/spreads.ts';
 import type { UnitSystemId } from '../core/units.ts';
 
-export function runMonteCarlo(plan: Plan): ReserveMonteCarloResult {
+/** Samples solved between two progress reports. */
+const STEP = 50;
+
+/** The reserve Monte Carlo, in steps so a long run can report how far it is. */
+export function runMonteCarlo(
+  plan: Plan,
+  progress?: (done: number, total: number, what: string) => void,
+): ReserveMonteCarloResult {
   const { spreads, samples, seed } = monteCarloSetup(plan);
-  return reserveMonteCarlo(plan, spreads, { samples, seed });
+  const run = createReserveRun(plan, spreads, { samples, seed });
+  while (!run.step(STEP)) progress?.(run.done, run.total, 'simulated flights');
+  return run.result();
 }
 
 /**

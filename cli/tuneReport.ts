@@ -58,8 +58,21 @@ export interface TuneReport {
   reserveSensitivity: Outcome<SensitivityEntry[]>;
 }
 
-export function runTune(plan: Plan, base: PlanResult): TuneReport {
+export function runTune(
+  plan: Plan,
+  base: PlanResult,
+  progress?: (done: number, total: number, what: string) => void,
+): TuneReport {
   const bestSpeeds: LegSpeedTuning[] = [];
+  const tuned = plan.legs.filter((l) => l.kind === 'cruise' || l.kind === 'loiter').length;
+  const steps = tuned + 3;
+  let done = 0;
+  const step = <T>(run: () => T): T => {
+    const out = run();
+    done += 1;
+    progress?.(done, steps, 'optimizer runs');
+    return out;
+  };
   plan.legs.forEach((leg, i) => {
     if (leg.kind !== 'cruise' && leg.kind !== 'loiter') return;
     const objective = legObjective(leg as CruiseLeg | LoiterLeg);
@@ -71,9 +84,12 @@ export function runTune(plan: Plan, base: PlanResult): TuneReport {
         tas_m_s: base.legs[i]?.meanTas_m_s ?? 0,
         value: legObjectiveValue(base, i, objective),
       },
-      outcome: attempt(() => bestSpeedForLeg(plan, i)),
+      outcome: step(() => attempt(() => bestSpeedForLeg(plan, i))),
     });
   });
+  const altitude = step(() => attempt(() => bestCruiseAltitude(plan)));
+  const payload = step(() => attempt(() => maxPayload(plan)));
+  const sensitivity = step(() => attempt(() => reserveSensitivity(plan)));
   return {
     plan: plan.name,
     baseline: {
@@ -81,10 +97,10 @@ export function runTune(plan: Plan, base: PlanResult): TuneReport {
       landingRemaining: base.landing.remaining,
       consumable: base.consumable,
     },
-    bestCruiseAltitude: attempt(() => bestCruiseAltitude(plan)),
+    bestCruiseAltitude: altitude,
     bestSpeeds,
-    maxPayload: attempt(() => maxPayload(plan)),
-    reserveSensitivity: attempt(() => reserveSensitivity(plan)),
+    maxPayload: payload,
+    reserveSensitivity: sensitivity,
   };
 }
 

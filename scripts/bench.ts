@@ -10,6 +10,9 @@
  *  5. Every example plan solved with the default ('precise') and the 'fast' tolerance, so a
  *     powerplant whose solve is out of line shows up (median per solve).
  *  6. The reserve Monte Carlo: 2000 samples of the 12-leg plan (target ≤ 1 s).
+ *  7. CLI batch mode: `legwise solve FILE...` in one process over 1000 copies of the 12-leg
+ *     plan file — read, strict decode, validate, solve, one NDJSON row each (target ≥ 500
+ *     plans/s on one core).
  * Timings use performance.now(); they depend on the machine and are printed, never asserted.
  */
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
@@ -22,6 +25,7 @@ import { maxPayload } from '../core/optimize/maxPayload.ts';
 import { payloadRange } from '../core/optimize/payloadRange.ts';
 import { reserveSensitivity } from '../core/optimize/sensitivity.ts';
 import { bestSpeedForLeg, legSpeedRange } from '../core/optimize/speedSweep.ts';
+import { runBatch } from '../cli/batch.ts';
 import { parsePlanText } from '../core/plan/load.ts';
 import { PLAN_SCHEMA_VERSION, PlanSchema } from '../core/plan/schema.ts';
 import type { Plan } from '../core/plan/schema.ts';
@@ -37,6 +41,8 @@ const TARGET_SOLVE_MS = 2;
 const TARGET_SWEEP_MS = 150;
 const TARGET_MONTE_CARLO_MS = 1000;
 const MONTE_CARLO_SAMPLES = 2000;
+const TARGET_BATCH_PLANS_S = 500;
+const BATCH_FILES = 1000;
 
 function stats(samples: number[]): { median: number; p90: number; min: number } {
   const s = [...samples].sort((a, b) => a - b);
@@ -365,6 +371,37 @@ function benchMonteCarlo(plan: Plan, source: string): void {
   );
 }
 
+function benchBatch(): void {
+  const path = fileURLToPath(new URL('../examples/twelve-legs.json', import.meta.url));
+  if (!existsSync(path)) {
+    console.log('7. CLI batch mode: examples/twelve-legs.json missing, skipped');
+    return;
+  }
+  const bytes = readFileSync(path);
+  const files = Array.from({ length: BATCH_FILES }, (_, i) => `plan-${i}.json`);
+  let bytesOut = 0;
+  const io = {
+    stdout: (t: string) => {
+      bytesOut += t.length;
+    },
+    stderr: () => undefined,
+    readFile: () => bytes.toString('utf8'),
+    stat: () => ({ size: bytes.length, isDirectory: false }),
+    readBytes: () => bytes,
+  };
+  const opts = { units: 'si' as const, json: true, csv: false };
+  runBatch(files.slice(0, 100), opts, io); // warm-up
+  bytesOut = 0;
+  const s = stats(time(() => runBatch(files, opts, io), 3));
+  const rate = BATCH_FILES / (s.median / 1000);
+  console.log(
+    `7. CLI batch mode: ${BATCH_FILES} copies of the 12-leg plan file, read → decode → validate → solve → NDJSON row, in one process, 3 runs`,
+  );
+  console.log(
+    `   median ${ms(s.median)} → ${rate.toFixed(0)} plans/s   target ≥ ${TARGET_BATCH_PLANS_S} plans/s: ${verdict(rate >= TARGET_BATCH_PLANS_S)} (${(bytesOut / 3 / BATCH_FILES).toFixed(0)} characters per row)`,
+  );
+}
+
 function main(): void {
   const { plan, source } = loadTwelveLegs();
   console.log(`Legwise benchmark — Node ${process.version}, ${process.platform}/${process.arch}\n`);
@@ -374,6 +411,7 @@ function main(): void {
   benchOptimizers(plan);
   benchExamples();
   benchMonteCarlo(plan, source);
+  benchBatch();
 }
 
 main();
