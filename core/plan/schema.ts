@@ -344,6 +344,8 @@ export const LoiterLegSchema = z.object({
   kind: z.literal('loiter'),
   ...legBase,
   ...track,
+  /** An orbit over a point needs no course (legs/loiter.ts); kept as the heading shown. */
+  course_deg: angle_deg().default(0),
   end: z.discriminatedUnion('by', [
     z.object({ by: z.literal('time'), time_s: bounded(0, 200 * 3600, 's', true) }),
     /** As long as the rest of the plan and the reserve policy still allow. */

@@ -194,6 +194,24 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
     }
     inputs.push(input);
   }
+  if (c.station != null) {
+    const st = c.station;
+    inputs.push({
+      id: `station:${i}`,
+      label: `${name}: holding station`,
+      legIndex: i,
+      value: st.wind_m_s,
+      limit: st.airspeed_m_s,
+      quantity: 'airspeed',
+      bound: 'max',
+      reference: Math.max(st.airspeed_m_s, 1),
+      subject: name,
+      fails: st.failed,
+      detail: st.failed
+        ? `Cannot hold station: the wind of ${fmt(st.wind_m_s)} m/s is at least the loiter airspeed of ${fmt(st.airspeed_m_s)} m/s.`
+        : `Wind ${fmt(st.wind_m_s)} m/s against the loiter airspeed ${fmt(st.airspeed_m_s)} m/s.`,
+    });
+  }
   if (c.climb !== null) {
     inputs.push({
       id: `climb:${i}`,

@@ -78,6 +78,10 @@ export function describeCheck(check: Check, system: UnitSystemId): string {
         : `Needs ${value} of thrust power, ${limit} available.`;
     case 'climb':
       return `Least rate of climb ${value} against ${limit}.`;
+    case 'station':
+      return check.state === 'fails'
+        ? `Cannot hold station: the wind of ${value} is at least the loiter airspeed of ${limit}.`
+        : `Wind ${value} against the loiter airspeed ${limit}.`;
     case 'ceiling':
       return `Highest pressure altitude ${value}${check.subject ? ` (${check.subject})` : ''} against a ceiling of ${limit}.`;
     case 'takeoffRun':

@@ -11,6 +11,9 @@
  * (idle consumption below idle; below zero the descent is steeper than an idle glide and
  * needs drag devices); glide at idle, sink = D·V/(W·k_a) = V/((L/D)·k_a). Paths steeper than
  * 30° (sin γ = MAX_SIN_GAMMA) are outside the small-angle model and stop the leg.
+ * An orbit over a point (loiter) covers no ground; it can hold station while its horizontal
+ * airspeed exceeds the wind speed (a circle flown in a steady wind drifts with the air mass,
+ * and the aircraft gets back upwind only while it is faster than the wind; common practice).
  * Cruise-climb: V and CL fixed, the density follows the weight, ρ = 2W/(V²·S·CL) (Anderson,
  * Aircraft Performance and Design, ch. 5). Horizontal airspeed √(V² − ḣ²) enters the wind
  * triangle.
@@ -58,6 +61,11 @@ export interface FlightPath {
   aloft?: AloftPath;
   /** Plan path of the leg's speed, for messages (e.g. `legs.3.speed`). */
   field: string;
+  /**
+   * An orbit over a point (loiter): no ground is covered (ground speed 0) and the wind
+   * components are the wind's whole speed as `headwind_m_s` (legs/loiter.ts).
+   */
+  orbit?: boolean;
 }
 
 /** Steepest flight path the small-angle model is used for (sin γ). */
@@ -231,7 +239,8 @@ export function evaluatePoint(
   out.amb = amb;
   out.tas_m_s = V;
   out.horizontal_m_s = horizontal;
-  out.groundSpeed_m_s = alongTrackSpeed(horizontal, out.headwind_m_s, out.crosswind_m_s);
+  out.groundSpeed_m_s =
+    path.orbit === true ? 0 : alongTrackSpeed(horizontal, out.headwind_m_s, out.crosswind_m_s);
   out.CL = CL;
   out.CD = CD;
   out.drag_N = D;

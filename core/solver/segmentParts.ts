@@ -9,7 +9,11 @@ import { powerMargin, type SegmentStats } from './segmentStats.ts';
 import type { LegSeries } from './types.ts';
 
 export type Independent = 't' | 'x' | 'h' | 'q';
-export type LimitKind = 'stall' | 'power' | 'climb' | 'consumable' | 'wind';
+/**
+ * 'wind': no ground speed along the course; 'station': an orbit over a point (loiter) whose
+ * airspeed does not exceed the wind speed, so the aircraft drifts downwind.
+ */
+export type LimitKind = 'stall' | 'power' | 'climb' | 'consumable' | 'wind' | 'station';
 
 /** Mission state carried from leg to leg. */
 export interface MissionState {
@@ -99,6 +103,11 @@ export function limitMargin(
       const cross = Math.abs(p.crosswind_m_s);
       return Math.min(p.groundSpeed_m_s, p.horizontal_m_s - cross) / p.tas_m_s + LIMIT_TOLERANCE;
     }
+    case 'station':
+      return (
+        (p.horizontal_m_s - Math.hypot(p.headwind_m_s, p.crosswind_m_s)) / p.tas_m_s +
+        LIMIT_TOLERANCE
+      );
   }
 }
 

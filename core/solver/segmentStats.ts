@@ -2,7 +2,8 @@
  * What a segment remembers of its flight for the leg result and the checks: spans of CL and
  * L/D, the least stall margin, the largest and the tightest power, the least rate of climb,
  * the highest altitude (and pressure altitude), where a best-speed schedule had to leave its
- * optimum, and the point where a descent is steepest beyond an idle glide.
+ * optimum, the point where a descent is steepest beyond an idle glide, and where an orbit is
+ * nearest to drifting with the wind.
  */
 import type { Point } from './point.ts';
 
@@ -37,6 +38,13 @@ export interface SegmentStats {
     dissipate_W: number;
   } | null;
   startTas_m_s: number;
+  /**
+   * Holding station in an orbit (point.ts): the least (horizontal airspeed − wind speed)/TAS
+   * and the wind speed and horizontal airspeed there.
+   */
+  stationMargin: number;
+  stationWind_m_s: number;
+  stationAirspeed_m_s: number;
   /** First point where a best-speed schedule was moved off its optimum, and why. */
   limitedSpeed: { tas_m_s: number; by: 'stall' | 'power' | 'mach' } | null;
   climbCapped: boolean;
@@ -60,6 +68,9 @@ export function emptyStats(): SegmentStats {
     maxPressureAltitude_m: -Infinity,
     steepDescent: null,
     startTas_m_s: 0,
+    stationMargin: Infinity,
+    stationWind_m_s: 0,
+    stationAirspeed_m_s: 0,
     limitedSpeed: null,
     climbCapped: false,
   };
@@ -103,6 +114,13 @@ export function record(stats: SegmentStats, p: Point): void {
     stats.limitedSpeed = { tas_m_s: p.tas_m_s, by: p.speedLimitedBy };
   }
   if (p.climbCapped) stats.climbCapped = true;
+  const wind = Math.hypot(p.headwind_m_s, p.crosswind_m_s);
+  const station = (p.horizontal_m_s - wind) / p.tas_m_s;
+  if (station < stats.stationMargin) {
+    stats.stationMargin = station;
+    stats.stationWind_m_s = wind;
+    stats.stationAirspeed_m_s = p.horizontal_m_s;
+  }
 }
 
 /** (available − required)/available; with nothing available, −1 if anything is required. */

@@ -6,6 +6,14 @@
 import type { LegKind } from '../plan/schema.ts';
 
 export type CheckState = 'ok' | 'tight' | 'fails';
+
+/**
+ * What stopped a failed leg: a flight limit (stall margin, power, rate of climb, the
+ * consumable, no ground speed in the wind, no holding station in an orbit), a leg refused
+ * before it started (its setup cannot be flown), or another limit of the point model.
+ */
+export type StopCause =
+  'stall' | 'power' | 'climb' | 'consumable' | 'wind' | 'station' | 'refused' | 'other';
 export type Consumable = 'fuel' | 'battery';
 
 /** The aircraft's state at a point along the mission. */
@@ -47,6 +55,8 @@ export interface LegResult {
   status: 'flown' | 'failed' | 'notReached';
   /** Why the leg failed, naming the field and limit where there is one. */
   error: string | null;
+  /** For a failed leg: the limit that stopped it (the Monte Carlo counts failures by it). */
+  stopCause?: StopCause;
   start: FlightState;
   end: FlightState;
   time_s: number;
@@ -86,7 +96,8 @@ export interface LegResult {
 export interface Check {
   /**
    * Stable id: `mtow`, `tank`, `reserve`, `socFloor`, `ceiling` (plan-level: the highest
-   * altitude of the mission), per leg `stall:3`, `power:3`, `climb:3`, and with an airfield
+   * altitude of the mission), per leg `stall:3`, `power:3`, `climb:3`,
+   * `station:3` (a loiter in wind), and with an airfield
    * `takeoffRun`, `launch`, `landingRun`.
    */
   id: string;
@@ -103,6 +114,7 @@ export interface Check {
     | 'power'
     | 'altitude'
     | 'verticalSpeed'
+    | 'airspeed'
     | 'volume'
     | 'distance';
   /** Relative margin: (limit − value)/limit for upper limits, (value − limit)/limit for lower ones. */

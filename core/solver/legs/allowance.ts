@@ -110,6 +110,7 @@ export function flyAllowance(
     ? `${legName(ctx.index, leg)}: ${consumableWord(model)} exhausted: the allowance needs ${fmt(amount)} ${unit} but ${fmt(start.left)} ${unit} were left`
     : null;
   const r = baseResult(ctx, leg, start, end, short ? 'failed' : 'flown', error);
+  if (short) r.stopCause = 'consumable';
   const s0 = flightState(model, start);
   const s1 = flightState(model, end);
   r.series = {

@@ -42,6 +42,11 @@ export interface LegCheckData {
   maxAltitude_m: number | null;
   /** Highest pressure altitude of the leg (what a ceiling limits). */
   maxPressureAltitude_m?: number | null;
+  /**
+   * An orbit (loiter) in wind: the wind speed and the airspeed where the airspeed is least
+   * above the wind, and whether the leg stopped because it could not hold station.
+   */
+  station?: { wind_m_s: number; airspeed_m_s: number; failed: boolean } | null;
 }
 
 export interface LegOutcome {
@@ -166,6 +171,8 @@ export function stopMessage(
       return `${name}: ${consumableWord(ctx.model)} exhausted ${progress(spec.indep, spec.to, start, seg.end)}`;
     case 'wind':
       return `${name}: the wind (${fmt(Math.hypot(p.headwind_m_s, p.crosswind_m_s))} m/s) leaves no ground speed along the course at ${fmt(p.tas_m_s)} m/s true airspeed`;
+    case 'station':
+      return `${name}: cannot hold station: the wind of ${fmt(Math.hypot(p.headwind_m_s, p.crosswind_m_s))} m/s at ${fmt(p.h_m)} m is at least the loiter airspeed of ${fmt(p.horizontal_m_s)} m/s TAS, so the aircraft drifts downwind ${progress(spec.indep, spec.to, start, seg.end)}`;
     default:
       return `${name}: ${seg.message}`;
   }
@@ -190,6 +197,7 @@ export function flyFlightLeg(
   const failed = seg.stoppedBy !== null;
   const error = failed ? stopMessage(ctx, leg, spec, seg, start) : null;
   const r = baseResult(ctx, leg, start, seg.end, failed ? 'failed' : 'flown', error);
+  if (seg.stoppedBy !== null) r.stopCause = seg.stoppedBy === 'error' ? 'other' : seg.stoppedBy;
   const s = seg.stats;
   r.CL = { min: finiteOr(s.CLmin, 0), max: finiteOr(s.CLmax, 0) };
   r.LD = { min: finiteOr(s.LDmin, 0), max: finiteOr(s.LDmax, 0) };
@@ -251,6 +259,14 @@ export function flyFlightLeg(
       climb: checks.climb && seen ? { min_m_s: s.minClimb_m_s, floor_m_s: climbFloor(spec) } : null,
       maxAltitude_m: seen ? s.maxAltitude_m : null,
       maxPressureAltitude_m: seen ? s.maxPressureAltitude_m : null,
+      station:
+        spec.path.orbit === true && Number.isFinite(s.stationMargin) && s.stationWind_m_s > 0
+          ? {
+              wind_m_s: s.stationWind_m_s,
+              airspeed_m_s: s.stationAirspeed_m_s,
+              failed: seg.stoppedBy === 'station',
+            }
+          : null,
     },
   };
 }
@@ -281,6 +297,7 @@ export function refusedLeg(
   why: string,
 ): LegOutcome {
   const r = baseResult(ctx, leg, start, start, 'failed', `${legName(ctx.index, leg)}: ${why}`);
+  r.stopCause = 'refused';
   const st = flightState(ctx.model, start);
   r.series = {
     t_s: [st.t_s],

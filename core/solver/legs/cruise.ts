@@ -89,6 +89,7 @@ export function flyCruise(ctx: LegContext, leg: CruiseLeg, start: MissionState):
     const unit = model.consumable === 'fuel' ? 'kg' : 'J';
     out.failed = true;
     out.result.status = 'failed';
+    out.result.stopCause = 'consumable';
     out.result.error = `${legName(ctx.index, leg)}: ${consumableWord(model)} exhausted: the leg asks for ${fmt(amount)} ${unit} but ${fmt(start.left)} ${unit} were left`;
   }
   return out;

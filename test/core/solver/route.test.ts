@@ -153,7 +153,7 @@ describe('legs flying a route', () => {
     expect(rel(r.totals.groundDistance_m, geodesic('p0', 'p1').distance_m)).toBeLessThan(1e-9);
   });
 
-  it('a loiter naming a waypoint takes the course only; its distance is not route progress', () => {
+  it('a loiter naming a waypoint takes the course only and, an orbit, covers no ground', () => {
     const plan = routePlan([
       cruise({ toWaypoint: 'p1', wind: WIND }),
       loiter({ toWaypoint: 'p1', wind: WIND, end: { by: 'time', time_s: 900 } }),
@@ -163,7 +163,9 @@ describe('legs flying a route', () => {
     expect(r.completed).toBe(true);
     expect(r.legs[1]!.time_s).toBeCloseTo(900, 6);
     expect(r.legs[1]!.course_deg).toBe(r.legs[0]!.course_deg);
-    expect(r.legs[1]!.groundDistance_m).toBeGreaterThan(0);
+    // an orbit over the point: no ground covered, air distance = TAS × time (definition)
+    expect(r.legs[1]!.groundDistance_m).toBe(0);
+    expect(rel(r.legs[1]!.airDistance_m, r.legs[1]!.meanTas_m_s * 900)).toBeLessThan(1e-9);
     // the cruise to p2 flies the whole geodesic p1→p2 (Karney 2013 via geographiclib)
     expect(rel(r.legs[2]!.groundDistance_m, geodesic('p1', 'p2').distance_m)).toBeLessThan(1e-9);
   });
