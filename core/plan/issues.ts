@@ -88,10 +88,15 @@ function reason(iss: z.core.$ZodIssue): string {
       return iss.message.startsWith('must ')
         ? iss.message
         : `must be ${EXPECTED_WORDS[iss.expected] ?? iss.expected}`;
+    // A number's bounds carry the schema's own words ("must be from 0 to 100 m/s").
     case 'too_small':
-      return sizeLimit(iss.origin, 'at least', Number(iss.minimum));
+      return iss.origin === 'number' && iss.message.startsWith('must ')
+        ? iss.message
+        : sizeLimit(iss.origin, 'at least', Number(iss.minimum));
     case 'too_big':
-      return sizeLimit(iss.origin, 'at most', Number(iss.maximum));
+      return iss.origin === 'number' && iss.message.startsWith('must ')
+        ? iss.message
+        : sizeLimit(iss.origin, 'at most', Number(iss.maximum));
     case 'invalid_value':
       return oneOf(iss.values);
     case 'invalid_union': {

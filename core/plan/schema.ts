@@ -15,9 +15,10 @@ export const PLAN_SCHEMA_VERSION = 2;
 function bounded(min: number, max: number, unit = '', openMin = false) {
   const u = unit ? ` ${unit}` : '';
   const range = openMin ? `above ${min} and at most ${max}${u}` : `from ${min} to ${max}${u}`;
-  return z
-    .number({ error: `must be a finite number${u}` })
-    .refine((v) => (openMin ? v > min : v >= min) && v <= max, { error: `must be ${range}` });
+  const error = `must be ${range}`;
+  // Built-in bounds (not a refine) so the generated JSON Schema carries them too.
+  const number = z.number({ error: `must be a finite number${u}` });
+  return (openMin ? number.gt(min, { error }) : number.gte(min, { error })).lte(max, { error });
 }
 
 const fraction = (min = 0, max = 1, openMin = false) => bounded(min, max, '', openMin);
@@ -383,6 +384,11 @@ export const LegSchema = z.discriminatedUnion('kind', [
 ]);
 
 export const PlanSchema = z.object({
+  /**
+   * Optional: where an editor finds the JSON Schema of this format (schemas/plan.schema.json),
+   * so it can validate and complete the file. Kept as written; Legwise itself ignores it.
+   */
+  $schema: z.string().min(1).max(2048).optional(),
   format: z.literal(PLAN_FORMAT),
   schemaVersion: z.literal(PLAN_SCHEMA_VERSION),
   name: z.string().min(1).max(120),
