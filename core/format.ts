@@ -1,9 +1,13 @@
 /**
  * Numbers for people: one place that turns an SI value into text in the chosen unit system
- * (core/units.ts) with a sensible resolution per quantity — altitude to 1 m or 10 ft,
- * distance to 0.1 km or 0.1 NM, durations as h:mm or m:ss. Used by the CLI, reports and UI.
- * A value that is not finite prints as "—", never as NaN or Infinity.
+ * (core/units.ts) with a resolution per quantity a pilot would accept (common practice of
+ * navigation logs): altitude to 1 m, or in feet exactly as entered (a whole number of feet)
+ * and otherwise to 10 ft; distance to 0.1 km or 0.1 NM; fuel to 0.1 lb / 0.1 L (1 lb from
+ * 100 lb on); energy in whole Wh from 10 Wh on and never as "0.00"; ISA deviation signed;
+ * durations in one format, h:mm (m:ss under an hour where seconds matter). Used by the CLI,
+ * reports and UI. A value that is not finite prints as "—", never as NaN or Infinity.
  */
+import { flightLevelOf, flightLevelText, type FlightLevelRule } from './levels.ts';
 import { fromSI, UNIT_SYSTEMS, UNITS } from './units.ts';
 import type { Quantity, UnitId, UnitSystemId } from './units.ts';
 
@@ -19,6 +23,10 @@ export interface FormatOptions {
   decimals?: number;
   /** Put a "+" in front of positive values (changes, margins). */
   signed?: boolean;
+  /** Durations: m:ss under an hour (where seconds matter) instead of h:mm. */
+  seconds?: boolean;
+  /** Altitudes: above the transition altitude read as flight levels ("FL350"). */
+  flightLevels?: FlightLevelRule;
 }
 
 /** Resolution of a displayed value: round to a multiple of `step`, show `decimals` places. */
@@ -39,7 +47,9 @@ function resolution(quantity: Quantity, unit: UnitId, value: number): Resolution
   const a = Math.abs(value);
   switch (quantity) {
     case 'altitude':
-      return unit === 'ft' ? { step: 10, decimals: 0 } : { decimals: unit === 'm' ? 0 : 1 };
+      // A whole number of feet is what was entered (8000 ft = 2438.4 m exactly): shown as is.
+      if (unit === 'ft') return isWhole(value) ? { decimals: 0 } : { step: 10, decimals: 0 };
+      return { decimals: unit === 'm' ? 0 : 1 };
     case 'distance':
       return { decimals: unit === 'm' || unit === 'ft' ? 0 : 1 };
     case 'shortDistance':
@@ -52,15 +62,22 @@ function resolution(quantity: Quantity, unit: UnitId, value: number): Resolution
     case 'verticalSpeed':
       return unit === 'ft_min' ? { step: 10, decimals: 0 } : { decimals: 1 };
     case 'mass':
+      return { decimals: a < 10 ? 2 : a < 100 ? 1 : 0 };
     case 'fuelMass':
+      // 0.1 lb, and 1 lb from 100 lb on; kilograms a step finer below 10 kg (small engines).
+      if (unit === 'lb') return { decimals: a < 100 ? 1 : 0 };
       return { decimals: a < 10 ? 2 : a < 100 ? 1 : 0 };
     case 'energy':
-      return { decimals: unit === 'J' ? 0 : a < 10 ? 2 : a < 100 ? 1 : 0 };
+      if (unit === 'J') return { decimals: 0 };
+      if (unit === 'Wh') return { decimals: a < 10 ? 1 : 0 };
+      return { decimals: a < 10 ? 2 : a < 100 ? 1 : 0 };
     case 'power':
       return { decimals: unit === 'W' ? 0 : a < 10 ? 2 : a < 100 ? 1 : 0 };
     case 'fuelVolume':
-    case 'temperature':
+      return { decimals: a < 1000 ? 1 : 0 };
     case 'temperatureDelta':
+      return { decimals: isWhole(value) ? 0 : 1 };
+    case 'temperature':
     case 'ratio':
       return { decimals: 1 };
     case 'pressure':
@@ -72,6 +89,11 @@ function resolution(quantity: Quantity, unit: UnitId, value: number): Resolution
     default:
       return { decimals: significantDecimals(value, 3) };
   }
+}
+
+/** Within rounding noise of a whole number (values typed as whole units, converted exactly). */
+function isWhole(value: number): boolean {
+  return Math.abs(value - Math.round(value)) < 1e-6;
 }
 
 /** Fixed-point text without "-0" or exponent noise; "—" when not finite. */
@@ -129,10 +151,16 @@ export function formatQuantity(
 ): string {
   if (!Number.isFinite(value_si)) return NO_VALUE;
   if (quantity === 'time' && opts.unit === undefined && opts.decimals === undefined) {
-    return formatDuration(value_si);
+    return formatDuration(value_si, opts);
+  }
+  if (quantity === 'altitude' && opts.flightLevels && opts.unit === undefined) {
+    const level = flightLevelOf(value_si, opts.flightLevels);
+    if (level !== null) return flightLevelText(level);
   }
   const r = rounded(value_si, quantity, system, opts);
-  const text = formatNumber(r.value, r.decimals, opts.signed);
+  let text = formatNumber(r.value, r.decimals, opts.signed ?? quantity === 'temperatureDelta');
+  // Nothing used reads "0", not "0.00" (a take-off leg of an electric aircraft, say).
+  if (/^0\.0+$/.test(text)) text = '0';
   if (opts.withUnit === false) return text;
   const label = UNITS[r.unit].label;
   if (label === '') return text;
@@ -144,17 +172,32 @@ function pad2(n: number): string {
 }
 
 /**
- * A duration as "m:ss min" below one hour and "h:mm h" from one hour on (rounded to the
- * second or the minute); "—" when not finite.
+ * A duration in the one format of the planner: h:mm ("0:19 h", "1:20 h"), rounded to the
+ * minute; with `seconds`, m:ss under an hour ("4:05 min") for the places where seconds
+ * matter (take-off and landing allowances, short holds). `withUnit: false` leaves the
+ * suffix off for a column whose header names the format. "—" when not finite.
  */
-export function formatDuration(seconds: number): string {
+export function formatDuration(
+  seconds: number,
+  opts: { seconds?: boolean; withUnit?: boolean } = {},
+): string {
   if (!Number.isFinite(seconds)) return NO_VALUE;
   if (seconds < 0) {
-    const text = formatDuration(-seconds);
-    return /^0:00 /.test(text) ? text : `-${text}`;
+    const text = formatDuration(-seconds, opts);
+    return /^0:00\b/.test(text) ? text : `-${text}`;
   }
+  const unit = (u: string) => (opts.withUnit === false ? '' : ` ${u}`);
   const whole = Math.round(seconds);
-  if (whole < 3600) return `${Math.floor(whole / 60)}:${pad2(whole % 60)} min`;
+  if (opts.seconds && whole < 3600) {
+    return `${Math.floor(whole / 60)}:${pad2(whole % 60)}${unit('min')}`;
+  }
   const minutes = Math.round(seconds / 60);
-  return `${Math.floor(minutes / 60)}:${pad2(minutes % 60)} h`;
+  return `${Math.floor(minutes / 60)}:${pad2(minutes % 60)}${unit('h')}`;
+}
+
+/** ISA deviation as pilots write it: "ISA +5 °C", "ISA -10 °C", "ISA +0 °C". */
+export function formatIsaDeviation(delta_K: number, system: UnitSystemId, unit?: UnitId): string {
+  if (!Number.isFinite(delta_K)) return `ISA ${NO_VALUE}`;
+  const text = formatQuantity(delta_K, 'temperatureDelta', system, unit ? { unit } : {});
+  return `ISA ${/^[-+]/.test(text) ? text : `+${text}`}`;
 }

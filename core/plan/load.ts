@@ -207,9 +207,25 @@ export function crossFieldIssues(plan: Plan): PlanIssue[] {
   return out;
 }
 
-/** Plan → file text: schema key order, 2-space indent, trailing newline. */
+/**
+ * A number as written to a file: 15 significant digits, the most a double always carries
+ * through decimal text and back (IEEE 754 binary64, DBL_DIG = 15), then the shortest text
+ * that reads back as that (ECMAScript Number::toString). Arithmetic noise such as
+ * 1 − 0.05 = 0.9500000000000001 is written 0.95; 2438.4 m (8000 ft) stays 2438.4.
+ */
+export function fileNumber(value: number): number {
+  return Number.isFinite(value) && value !== 0 ? Number(value.toPrecision(15)) : value;
+}
+
+/** Plan → file text: schema key order, 2-space indent, trailing newline, no float noise. */
 export function serializePlan(plan: Plan): string {
-  return `${JSON.stringify(orderBySchema(PlanSchema, plan), null, 2)}\n`;
+  const ordered = orderBySchema(PlanSchema, plan);
+  const text = JSON.stringify(
+    ordered,
+    (_k, v: unknown) => (typeof v === 'number' ? fileNumber(v) : v),
+    2,
+  );
+  return `${text}\n`;
 }
 
 export { migratePlan } from './migrate.ts';

@@ -28,13 +28,13 @@ if (!haveChromium && !process.env.CI) {
   );
 }
 
-/** The totals row as the page must show it: time with its unit, the rest with the unit in the header. */
+/** The totals row as the page must show it: the header names the unit (h:mm for the time). */
 function expectedTotals(plan: Plan, system: UnitSystemId) {
   const r = solvePlan(plan, { samplesPerLeg: SAMPLES_PER_LEG });
   const q = r.consumable === 'battery' ? 'energy' : 'fuelMass';
   const bare = { withUnit: false };
   return {
-    time: formatQuantity(r.totals.time_s, 'time', system),
+    time: formatQuantity(r.totals.time_s, 'time', system, bare),
     distance: formatQuantity(r.totals.groundDistance_m, 'distance', system, bare),
     used: formatQuantity(
       r.consumable === 'battery' ? r.totals.energyUsed_J : r.totals.fuelUsed_kg,

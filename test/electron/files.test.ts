@@ -33,6 +33,18 @@ const crashBeforeRename = {
   rename: async () => Promise.reject(new Error('simulated crash before rename')),
 };
 
+describe('savePlanFile', () => {
+  it('writes no float noise (15 significant digits, IEEE 754 binary64 DBL_DIG)', async () => {
+    const target = path.join(dir, 'noise.legwise.json');
+    const plan = newPlan();
+    plan.environment.isaOffset_K = 0.95 + 1e-16; // 0.9500000000000001 in memory
+    await savePlanFile(target, plan);
+    const text = await fsp.readFile(target, 'utf8');
+    expect(text).toContain('"isaOffset_K": 0.95,');
+    expect(text).not.toMatch(/\d\.\d{16,}/);
+  });
+});
+
 describe('atomicWrite', () => {
   it('replaces the file and leaves no temporary file behind', async () => {
     const target = path.join(dir, 'a.txt');

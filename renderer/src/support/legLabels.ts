@@ -2,7 +2,7 @@
  * How a leg is named on screen and in exports: its own label, or its kind and position.
  */
 import type { Leg } from '../../../core/plan/schema.ts';
-import { formatNumber } from '../../../core/format.ts';
+import { formatDuration, formatNumber } from '../../../core/format.ts';
 import { LEG_KIND_NAMES } from './legFields.ts';
 
 export function legTitle(leg: Pick<Leg, 'kind' | 'label'>, index: number): string {
@@ -26,7 +26,10 @@ export function legSummary(leg: Leg, fmt: Fmt, routeTo?: string): string {
       const a = leg.allowance;
       if (a.by === 'fuel') return `allowance ${fmt(a.fuel_kg, 'fuelMass')}`;
       if (a.by === 'energy') return `allowance ${fmt(a.energy_J, 'energy')}`;
-      if (a.by === 'time') return `allowance ${fmt(a.time_s, 'time')} at full power`;
+      // Seconds matter in a one-minute allowance: m:ss, not "0:01 h".
+      if (a.by === 'time') {
+        return `allowance ${formatDuration(a.time_s, { seconds: true })} at full power`;
+      }
       return `allowance ${formatNumber(a.fraction * 100, 1)} % of mass`;
     }
     case 'climb':
