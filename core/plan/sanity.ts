@@ -64,6 +64,17 @@ function polarWarnings(plan: Plan, cls: AircraftClass, out: string[]): void {
       what: 'for powered aircraft (sailplanes reach about 40)',
     });
   }
+  const span = plan.aircraft.span_m;
+  if (span !== undefined && polar.induced.by === 'geometry') {
+    // AR = b²/S (definition); a span far from it makes the Reynolds number's chord doubtful.
+    const ar = (span * span) / plan.aircraft.wingArea_m2;
+    if (Math.abs(ar - polar.induced.AR) > 0.1 * polar.induced.AR) {
+      out.push(
+        `aircraft.span_m: ${show(span)} m gives an aspect ratio b²/S of ${show(ar)}, ` +
+          `not the polar's ${show(polar.induced.AR)} (aircraft.polar.induced.AR)`,
+      );
+    }
+  }
   if (polar.CLmaxFlaps !== undefined && polar.CLmaxFlaps < polar.CLmax) {
     out.push(
       `aircraft.polar.CLmaxFlaps: ${show(polar.CLmaxFlaps)} is below CLmax (${show(polar.CLmax)}); ` +

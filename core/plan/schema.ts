@@ -125,6 +125,8 @@ export const FieldDataSchema = z.object({
 export const AircraftSchema = z.object({
   name: z.string().min(1).max(120),
   wingArea_m2: bounded(0.01, 1000, 'm²'),
+  /** Wing span; gives the mean chord S/b for the Reynolds-number warning (else from the AR). */
+  span_m: bounded(0.1, 120, 'm').optional(),
   polar: PolarSchema,
   mass: z.object({
     /** Empty mass: everything but payload, fuel and (electric) battery pack. */

@@ -19,6 +19,7 @@ import { guardResult } from './guard.ts';
 import { baseResult, legName, refusedLeg, type LegContext } from './legs/common.ts';
 import { flyLeg, type LegOutcome } from './legs/index.ts';
 import { searchLoiterConsumption } from './loiterReserve.ts';
+import { reynoldsWarnings } from './reynolds.ts';
 import { buildModel, RELATIVE_TOLERANCE, type FlightModel, type SolveTolerance } from './model.ts';
 import { fmt } from './point.ts';
 import { requiredReserves } from './reserves.ts';
@@ -226,6 +227,7 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
   }
   const field = fieldChecks(model, plan, end.mass_kg);
   warnings.push(...field.warnings);
+  warnings.push(...reynoldsWarnings(model, plan, legs));
   const checks = missionChecks(
     model,
     plan,

@@ -117,6 +117,18 @@ describe('planWarnings', () => {
     );
   });
 
+  it('a span that does not match the aspect ratio (AR = b²/S, definition)', () => {
+    const p = plan(PISTON);
+    const S = p.aircraft.wingArea_m2;
+    const AR = p.aircraft.polar.induced.by === 'geometry' ? p.aircraft.polar.induced.AR : 0;
+    const matching = Math.sqrt(AR * S);
+    expect(warningFor(plan(PISTON, { 'aircraft.span_m': matching }), 'aircraft.span_m')).toBe(
+      undefined,
+    );
+    const off = warningFor(plan(PISTON, { 'aircraft.span_m': 1.5 * matching }), 'aircraft.span_m');
+    expect(off).toContain(`not the polar's`);
+  });
+
   it('does not warn for weight above MTOW or fuel above the tank (those are solver checks)', () => {
     const heavy = plan(PISTON, {
       'aircraft.mass.payload_kg': 900,
