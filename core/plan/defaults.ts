@@ -79,7 +79,8 @@ export function newPlan(): Plan {
     format: PLAN_FORMAT,
     schemaVersion: PLAN_SCHEMA_VERSION,
     name: 'New plan',
-    notes: 'Example aircraft: values invented for demonstration, not from any real type.',
+    // A new plan starts without notes; the demo plans in examples/ carry their own.
+    notes: '',
     aircraft: {
       name: 'Small electric UAV (example)',
       wingArea_m2: 0.9,

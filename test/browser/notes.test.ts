@@ -1,0 +1,66 @@
+// Code passed to page.evaluate runs in the page: it needs the DOM types.
+/// <reference lib="dom" />
+/**
+ * The plan's notes in headless Chromium, as a person uses them: a new plan has none, typed
+ * notes stay with the plan, a demo shows its own note (the text in examples/), New empties
+ * them again. Expected texts come from the example files themselves.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { examplePlan } from '../renderer/fixtures.ts';
+import { haveChromium, openPlanner, type PlannerPage } from './harness.ts';
+
+const byTestId = (id: string) => `[data-testid="${id}"]`;
+
+describe.runIf(haveChromium || !!process.env.CI)('plan notes in the planner', () => {
+  let planner: PlannerPage;
+  let page: Page;
+  const pageErrors: string[] = [];
+
+  beforeAll(async () => {
+    if (!haveChromium)
+      throw new Error('CI is set but /usr/bin/chromium is missing: the browser tests cannot run.');
+    planner = await openPlanner({ width: 1280, height: 800, outDir: 'artifacts/page-notes' });
+    page = planner.page;
+    page.on('pageerror', (e) => pageErrors.push(String(e)));
+    await page.goto(planner.url);
+    await page.waitForSelector(byTestId('total-time'));
+  });
+
+  afterAll(async () => {
+    await planner?.close();
+  });
+
+  it('a new plan starts with empty notes, and typed notes stay', async () => {
+    await page.click(byTestId('mission-tab-notes'));
+    const notes = page.locator(byTestId('field-notes'));
+    expect(await notes.inputValue()).toBe('');
+    await notes.click();
+    await page.keyboard.type('Ridge wind picks up after 14:00.', { delay: 20 });
+    await page.keyboard.press('Enter');
+    await page.keyboard.type('Spare pack in the van.', { delay: 20 });
+    await notes.blur();
+    expect(await notes.inputValue()).toBe(
+      'Ridge wind picks up after 14:00.\nSpare pack in the van.',
+    );
+    // Other tabs and back: the text is the plan's, not the control's.
+    await page.click(byTestId('mission-tab-legs'));
+    await page.click(byTestId('mission-tab-notes'));
+    expect(await page.locator(byTestId('field-notes')).inputValue()).toBe(
+      'Ridge wind picks up after 14:00.\nSpare pack in the van.',
+    );
+  });
+
+  it('a demo plan shows its own note; New empties the notes', async () => {
+    const demo = examplePlan('survey-uav-electric');
+    page.once('dialog', (d) => void d.accept()); // "discard unsaved changes?" if asked
+    await page.selectOption(byTestId('demo-picker'), 'survey-uav-electric');
+    await page.click(byTestId('mission-tab-notes'));
+    await expect.poll(() => page.locator(byTestId('field-notes')).inputValue()).toBe(demo.notes);
+    page.once('dialog', (d) => void d.accept());
+    await page.click(byTestId('file-new'));
+    await page.click(byTestId('mission-tab-notes'));
+    await expect.poll(() => page.locator(byTestId('field-notes')).inputValue()).toBe('');
+    expect(pageErrors).toEqual([]);
+  });
+});
