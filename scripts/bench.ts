@@ -216,6 +216,36 @@ function benchSolve(plan: Plan, source: string): void {
   console.log(
     `   ODE steps per leg: [${steps.join(', ')}], mean over flight legs ${mean.toFixed(1)}`,
   );
+  benchAgainstConstantPropeller(plan);
+}
+
+/** The plan with the flat propeller of earlier versions (constant η, no `propeller` block). */
+function withConstantPropeller(plan: Plan): Plan | null {
+  const pp = plan.aircraft.powerplant;
+  if (pp.type === 'jet' || pp.propeller === undefined) return null;
+  const { propeller: _curve, ...flat } = pp;
+  return { ...plan, aircraft: { ...plan.aircraft, powerplant: flat } };
+}
+
+/** Cost of the speed-dependent propeller against the old constant η, timed alternately. */
+function benchAgainstConstantPropeller(plan: Plan): void {
+  const old = withConstantPropeller(plan);
+  if (old === null) return;
+  for (let i = 0; i < 50; i++) {
+    solvePlan(plan);
+    solvePlan(old);
+  }
+  const a: number[] = [];
+  const b: number[] = [];
+  for (let i = 0; i < 200; i++) {
+    a.push(...time(() => solvePlan(plan), 1));
+    b.push(...time(() => solvePlan(old), 1));
+  }
+  const now = stats(a).median;
+  const before = stats(b).median;
+  console.log(
+    `   propeller η(V) (this plan's model) median ${ms(now)} vs constant η (the old model) ${ms(before)}, timed alternately: ×${(now / before).toFixed(2)}`,
+  );
 }
 
 function benchSweep(plan: Plan): void {
@@ -369,6 +399,15 @@ function benchMonteCarlo(plan: Plan, source: string): void {
   console.log(
     `   reserve not kept in ${(100 * last.probabilityReserveNotKept).toFixed(1)} % of samples; ${(MONTE_CARLO_SAMPLES / (s.median / 1000)).toFixed(0)} solves per second`,
   );
+  const flat = withConstantPropeller(plan);
+  if (flat !== null) {
+    const runOld = () =>
+      reserveMonteCarlo(flat, spreadsFromDefaults(flat), { samples: MONTE_CARLO_SAMPLES, seed: 1 });
+    const pair = time(runOld, 1).concat(time(run, 1));
+    console.log(
+      `   one run each, back to back: constant η (the old model) ${ms(pair[0]!)}, propeller η(V) ${ms(pair[1]!)}: ×${(pair[1]! / pair[0]!).toFixed(2)}`,
+    );
+  }
 }
 
 function benchBatch(): void {

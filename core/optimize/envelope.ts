@@ -8,7 +8,7 @@ import type { AtmosphereState } from '../atmosphere.ts';
 import { minDragSpeed, minPowerSpeed, powerRequired_W, stallSpeed } from '../polar.ts';
 import type { PolarCoefficients } from '../polar.ts';
 import type { Plan } from '../plan/schema.ts';
-import { availableThrustPower_W } from '../propulsion/index.ts';
+import { availableThrustPower_W, type PropellerCurve } from '../propulsion/index.ts';
 import { ambientAt, buildModel } from '../solver/model.ts';
 import { G0 } from '../units.ts';
 import { bisectEdge } from './search1d.ts';
@@ -23,6 +23,8 @@ export interface FlightConditions {
   weight_N: number;
   wingArea_m2: number;
   polar: PolarCoefficients;
+  /** The propeller's efficiency curve (constant 1 for a jet; unused there). */
+  propCurve: PropellerCurve;
 }
 
 /**
@@ -45,6 +47,7 @@ export function flightConditions(
     weight_N: mass_kg * G0,
     wingArea_m2: model.S_m2,
     polar: model.polar,
+    propCurve: model.power.prop,
   };
 }
 
@@ -57,7 +60,8 @@ export function requiredPowerAt(c: FlightConditions, V_m_s: number): number {
 }
 
 export function availablePowerAt(plan: Plan, c: FlightConditions, V_m_s: number): number {
-  return availableThrustPower_W(plan.aircraft.powerplant, c.atm, c.pressureAltitude_m, V_m_s);
+  const pp = plan.aircraft.powerplant;
+  return availableThrustPower_W(pp, c.atm, c.pressureAltitude_m, V_m_s, c.propCurve);
 }
 
 function excessPower_W(plan: Plan, c: FlightConditions, V_m_s: number): number {

@@ -66,6 +66,62 @@ export const JetSchema = z.object({
   fuel: FuelSchema,
 });
 
+/** One point of a propeller efficiency table: x is TAS (m/s) or advance ratio J = V/(n·D). */
+export const PropellerTablePointSchema = z.object({
+  x: bounded(0, 400, '', true),
+  efficiency: fraction(0, 1, true).refine((v) => v < 1, { error: 'must be below 1' }),
+});
+
+/**
+ * Propeller efficiency as a function of airspeed (core/propulsion/propellerCurve.ts). Absent:
+ * the constant propEfficiency of earlier versions. `momentum`: actuator-disk momentum theory
+ * times a profile factor, calibrated so that propEfficiency holds at the cruise point
+ * (cruisePowerFraction of the maximum shaft power at cruiseAltitude_m, ISA, at
+ * cruiseSpeed_m_s TAS — or, without it, at the level-flight speed that power gives at MTOW).
+ * `table`: the user's η(V) or η(J), J = V/(n·D) with n = rpm/60; the x values must increase.
+ */
+export const PropellerCurveSchema = z.discriminatedUnion('model', [
+  z.object({
+    model: z.literal('momentum'),
+    /** Diameter of one propeller (the aircraft's engineCount propellers share the power). */
+    diameter_m: bounded(0.05, 6, 'm'),
+    /** Pressure altitude of the cruise point (ISA day). */
+    cruiseAltitude_m: bounded(-400, 15_000, 'm'),
+    /** Shaft power at the cruise point, as a fraction of the maximum there. */
+    cruisePowerFraction: fraction(0.1, 1),
+    /** TAS of the cruise point; absent: the level-flight speed at MTOW with that power. */
+    cruiseSpeed_m_s: bounded(0, 300, 'm/s', true).optional(),
+  }),
+  z
+    .object({
+      model: z.literal('table'),
+      by: z.enum(['airspeed', 'advanceRatio']),
+      points: z
+        .array(PropellerTablePointSchema)
+        .min(2)
+        .max(100)
+        .superRefine((pts, ctx) => {
+          for (let i = 1; i < pts.length; i++) {
+            if (!(pts[i]!.x > pts[i - 1]!.x))
+              ctx.addIssue({
+                code: 'custom',
+                path: [i, 'x'],
+                message: `must be above the previous point's x (${pts[i - 1]!.x}): the table must increase in x`,
+              });
+          }
+        }),
+      /** Propeller speed for J = V/(n·D) (constant-speed propeller). */
+      rpm: bounded(100, 60_000, 'rpm').optional(),
+      diameter_m: bounded(0.05, 6, 'm').optional(),
+      /** Total static thrust (take-off run); absent: the table's first point carried to V = 0. */
+      staticThrust_N: bounded(0, 1_000_000, 'N', true).optional(),
+    })
+    .refine((t) => t.by === 'airspeed' || (t.rpm !== undefined && t.diameter_m !== undefined), {
+      error: 'an advance-ratio table needs rpm and diameter_m',
+      path: ['rpm'],
+    }),
+]);
+
 export const PropellerSchema = z.object({
   type: z.literal('propeller'),
   engine: z.enum(['piston', 'turboprop']),
@@ -78,7 +134,9 @@ export const PropellerSchema = z.object({
   ]),
   /** Full power is held up to this pressure altitude (turbo/supercharged); 0 for none. */
   criticalAltitude_m: bounded(0, 15_000, 'm'),
+  /** Propeller efficiency; with `propeller`, the efficiency at its cruise point. */
   propEfficiency: fraction(0.2, 0.95),
+  propeller: PropellerCurveSchema.optional(),
   /** Brake-specific fuel consumption, kg/J. */
   bsfc_kg_J: bounded(0, 1e-6, 'kg/J', true),
   /** Shaft power at idle as a fraction of maximum (descent, glide). */
@@ -104,7 +162,9 @@ export const ElectricSchema = z.object({
   maxShaftPower_W: bounded(0, 10_000_000, 'W', true),
   motorEfficiency: fraction(0.3, 1),
   controllerEfficiency: fraction(0.3, 1),
+  /** Propeller efficiency; with `propeller`, the efficiency at its cruise point. */
   propEfficiency: fraction(0.2, 0.95),
+  propeller: PropellerCurveSchema.optional(),
   battery: BatterySchema,
 });
 
@@ -137,6 +197,13 @@ export const AircraftSchema = z.object({
   /** Absolute operating ceiling the operator may not exceed (approved or chosen limit). */
   ceiling_m: bounded(0, 20_000, 'm'),
   powerplant: PowerplantSchema,
+  /** Number of engines sharing the powerplant's totals (absent: 1). */
+  engineCount: z.number().int().min(1).max(8).optional(),
+  /**
+   * Multi-engine: drag coefficient added with one engine inoperative (stopped or feathered
+   * propeller, trim); absent: 0.003 (from memory, light twin with a feathered propeller).
+   */
+  oeiDragIncrement: bounded(0, 0.05).optional(),
   /** Optional: needed only for take-off and landing distances. */
   field: FieldDataSchema.optional(),
 });
@@ -416,6 +483,7 @@ export type JetPowerplant = z.infer<typeof JetSchema>;
 export type PropellerPowerplant = z.infer<typeof PropellerSchema>;
 export type ElectricPowerplant = z.infer<typeof ElectricSchema>;
 export type Battery = z.infer<typeof BatterySchema>;
+export type PropellerCurveData = z.infer<typeof PropellerCurveSchema>;
 export type Fuel = z.infer<typeof FuelSchema>;
 export type Environment = z.infer<typeof EnvironmentSchema>;
 export type ReservePolicy = z.infer<typeof ReservePolicySchema>;

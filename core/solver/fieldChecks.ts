@@ -106,7 +106,7 @@ function takeoffCheck(
 ): void {
   const pp = plan.aircraft.powerplant;
   const diameter = plan.aircraft.field?.propDiameter_m;
-  if (pp.type !== 'jet' && diameter === undefined) {
+  if (pp.type !== 'jet' && pp.propeller === undefined && diameter === undefined) {
     out.warnings.push(
       'Take-off distance not computed: the propeller diameter (aircraft.field.propDiameter_m) is needed for the static thrust.',
     );
@@ -119,6 +119,7 @@ function takeoffCheck(
       air.atm,
       air.pressureAltitude_m,
       diameter === undefined ? {} : { propDiameter_m: diameter },
+      plan.aircraft,
     );
     const wind = windComponents(rw.heading_deg, rw.surfaceWind);
     const r = takeoffDistance({

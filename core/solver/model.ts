@@ -102,7 +102,7 @@ export function buildModel(plan: Plan, tolerance: SolveTolerance = 'precise'): F
   const pp = ac.powerplant;
   const consumable = consumableOf(pp);
   const polar = polarCoefficients(ac.polar);
-  const power = powerConstants(pp, atmosphereAt(0));
+  const power = powerConstants(pp, atmosphereAt(0), ac);
   const usable = pp.type === 'electric' ? usableEnergy_J(pp.battery) : 0;
   const start = pp.type === 'electric' ? usable : pp.fuel.load_kg;
   const carried = pp.type === 'electric' ? pp.battery.mass_kg : pp.fuel.load_kg;

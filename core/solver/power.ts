@@ -1,7 +1,9 @@
 /**
  * The powerplant as the integrator's right-hand side sees it: the models of
  * core/propulsion/index.ts (jet T_max = T_SL·σ^n and TSFC·T; propeller Gagg–Ferrar or σ^n
- * lapse and BSFC·P; electric chain efficiency and Traub's 2011 Peukert drain), evaluated
+ * lapse and BSFC·P; electric drivetrain efficiency and Traub's 2011 Peukert drain; for both
+ * propeller powerplants the efficiency curve η(V, P) of core/propulsion/propellerCurve.ts —
+ * constant, momentum theory or a table), evaluated
  * without re-validating the plan's constants on every call.
  *
  * Why: the propulsion functions check every argument (InputError), which is right at an API
@@ -12,7 +14,13 @@
  * test/core/solver/power.test.ts checks that both paths give the same numbers.
  */
 import type { AtmosphereState } from '../atmosphere.ts';
-import type { Powerplant } from '../plan/schema.ts';
+import type { Aircraft, Powerplant } from '../plan/schema.ts';
+import {
+  curveEfficiency,
+  curveShaftPower,
+  propellerCurve,
+  type PropellerCurve,
+} from '../propulsion/propellerCurve.ts';
 import {
   availableThrustPower_W,
   chainEfficiency,
@@ -28,20 +36,30 @@ export interface PowerConstants {
   sfc: number;
   /** Jet: idle fraction of T_max; propeller: idle fraction of P_max; electric: 0. */
   idleFraction: number;
-  /** Propeller and electric: propeller efficiency; jet: 1. */
+  /** Propeller and electric: propeller efficiency at the cruise point; jet: 1. */
   propEfficiency: number;
-  /** Electric: motor × controller × propeller efficiency; others 1. */
+  /** Propeller and electric: η(V, P) of the propeller; jet: constant 1 (unused). */
+  prop: PropellerCurve;
+  /** Electric: motor × controller × propeller efficiency (at the cruise point); others 1. */
   chainEfficiency: number;
+  /** Electric: motor × controller efficiency (battery to shaft); others 1. */
+  driveEfficiency: number;
   /** Electric: Peukert exponent n and Rt/E_nominal (s/J); others 1 and 0. */
   peukertExponent: number;
   ratedTimeOverEnergy_s_J: number;
 }
 
 /** Validates the powerplant through core/propulsion (throws InputError) and keeps its constants. */
-export function powerConstants(pp: Powerplant, seaLevel: AtmosphereState): PowerConstants {
+export function powerConstants(
+  pp: Powerplant,
+  seaLevel: AtmosphereState,
+  aircraft?: Pick<Aircraft, 'wingArea_m2' | 'polar' | 'mass' | 'engineCount'>,
+): PowerConstants {
+  const prop: PropellerCurve =
+    pp.type === 'jet' ? { kind: 'constant', efficiency: 1 } : propellerCurve(pp, aircraft);
   // One call of each propulsion function checks every constant they use.
-  availableThrustPower_W(pp, seaLevel, 0, 1);
-  consumptionRate(pp, 1, 1, seaLevel, 0);
+  availableThrustPower_W(pp, seaLevel, 0, 1, prop);
+  consumptionRate(pp, 1, 1, seaLevel, 0, prop);
   switch (pp.type) {
     case 'jet':
       return {
@@ -49,7 +67,9 @@ export function powerConstants(pp: Powerplant, seaLevel: AtmosphereState): Power
         sfc: pp.tsfc_kg_Ns,
         idleFraction: pp.idleFuelFraction,
         propEfficiency: 1,
+        prop,
         chainEfficiency: 1,
+        driveEfficiency: 1,
         peukertExponent: 1,
         ratedTimeOverEnergy_s_J: 0,
       };
@@ -59,7 +79,9 @@ export function powerConstants(pp: Powerplant, seaLevel: AtmosphereState): Power
         sfc: pp.bsfc_kg_J,
         idleFraction: pp.idlePowerFraction,
         propEfficiency: pp.propEfficiency,
+        prop,
         chainEfficiency: 1,
+        driveEfficiency: 1,
         peukertExponent: 1,
         ratedTimeOverEnergy_s_J: 0,
       };
@@ -69,7 +91,9 @@ export function powerConstants(pp: Powerplant, seaLevel: AtmosphereState): Power
         sfc: 0,
         idleFraction: 0,
         propEfficiency: pp.propEfficiency,
+        prop,
         chainEfficiency: chainEfficiency(pp),
+        driveEfficiency: pp.motorEfficiency * pp.controllerEfficiency,
         peukertExponent: pp.battery.peukertExponent,
         ratedTimeOverEnergy_s_J: pp.battery.ratedDischargeTime_s / pp.battery.energy_J,
       };
@@ -96,31 +120,51 @@ export function engineMaximum(
   }
 }
 
-/** Maximum thrust power at TAS V: jet T_max·V, otherwise η_prop·P_max. */
-export function availablePower_W(c: PowerConstants, engineMax: number, V_m_s: number): number {
-  return c.type === 'jet' ? engineMax * V_m_s : c.propEfficiency * engineMax;
+/** Maximum thrust power at TAS V: jet T_max·V, otherwise η(V, P_max)·P_max. */
+export function availablePower_W(
+  c: PowerConstants,
+  engineMax: number,
+  V_m_s: number,
+  rho_kg_m3: number,
+): number {
+  if (c.type === 'jet') return engineMax * V_m_s;
+  return curveEfficiency(c.prop, engineMax, V_m_s, rho_kg_m3) * engineMax;
+}
+
+/** Shaft power for a thrust power ≥ 0 at TAS V (propeller and electric; jet: unused). */
+export function shaftPowerFor(
+  c: PowerConstants,
+  thrustPower_W: number,
+  V_m_s: number,
+  rho_kg_m3: number,
+): number {
+  if (c.prop.kind === 'constant') return thrustPower_W / c.propEfficiency;
+  return curveShaftPower(c.prop, thrustPower_W, V_m_s, rho_kg_m3);
 }
 
 /**
  * Consumption for a thrust power (≤ 0 means idle): fuel kg/s (jet TSFC·max(T, idle·T_max);
- * propeller BSFC·max(P/η, idle·P_max)) or battery drain W (electric, Peukert applied at or
- * above the rated discharge power).
+ * propeller BSFC·max(P_shaft, idle·P_max)) or battery drain W (electric P_shaft/(η_m·η_c),
+ * Peukert applied at or above the rated discharge power).
  */
 export function consumption(
   c: PowerConstants,
   engineMax: number,
   thrustPower_W: number,
   V_m_s: number,
+  rho_kg_m3: number,
 ): number {
   const demand = thrustPower_W > 0 ? thrustPower_W : 0;
   switch (c.type) {
     case 'jet':
       return c.sfc * Math.max(demand / V_m_s, c.idleFraction * engineMax);
     case 'propeller':
-      return c.sfc * Math.max(demand / c.propEfficiency, c.idleFraction * engineMax);
+      return (
+        c.sfc * Math.max(shaftPowerFor(c, demand, V_m_s, rho_kg_m3), c.idleFraction * engineMax)
+      );
     case 'electric': {
       // Peukert only at or above the rated discharge power (core/propulsion/electric.ts).
-      const P = demand / c.chainEfficiency;
+      const P = shaftPowerFor(c, demand, V_m_s, rho_kg_m3) / c.driveEfficiency;
       if (c.peukertExponent === 1) return P;
       const x = P * c.ratedTimeOverEnergy_s_J;
       return x > 1 ? P * Math.pow(x, c.peukertExponent - 1) : P;
@@ -130,22 +174,30 @@ export function consumption(
 
 /**
  * How far the demand is above the idle floor, as a fraction of the maximum: jet
- * (P/V − idle·T_max)/T_max, propeller (P/η − idle·P_max)/P_max, electric P/(η·P_max) (its
- * floor is at zero thrust power). The consumption has a kink where this crosses 0; the integrator
- * restarts there instead of stepping across it (segment.ts).
+ * (P/V − idle·T_max)/T_max, propeller (P_shaft − idle·P_max)/P_max, electric P_shaft/P_max
+ * (its floor is at zero thrust power). The consumption has a kink where this crosses 0; the
+ * integrator restarts there instead of stepping across it (segment.ts).
  */
 export function idleExcess(
   c: PowerConstants,
   engineMax: number,
   thrustPower_W: number,
   V_m_s: number,
+  rho_kg_m3: number,
 ): number {
   switch (c.type) {
     case 'jet':
       return thrustPower_W / V_m_s / engineMax - c.idleFraction;
     case 'propeller':
-      return thrustPower_W / c.propEfficiency / engineMax - c.idleFraction;
+      return signedShaft(c, thrustPower_W, V_m_s, rho_kg_m3) / engineMax - c.idleFraction;
     case 'electric':
-      return thrustPower_W / (c.propEfficiency * engineMax);
+      return signedShaft(c, thrustPower_W, V_m_s, rho_kg_m3) / engineMax;
   }
+}
+
+/** Shaft power with the sign of the thrust power (a negative demand mirrored, for the kink test). */
+function signedShaft(c: PowerConstants, thrustPower_W: number, V: number, rho: number): number {
+  return thrustPower_W >= 0
+    ? shaftPowerFor(c, thrustPower_W, V, rho)
+    : -shaftPowerFor(c, -thrustPower_W, V, rho);
 }

@@ -18,7 +18,7 @@ import type { PolarCoefficients } from '../polar.ts';
 import { G0 } from '../units.ts';
 import type { Ambient, FlightModel } from './model.ts';
 import { maximizeBounded, rootBracketed } from './optimize1d.ts';
-import { availablePower_W, consumption } from './power.ts';
+import { availablePower_W, consumption, shaftPowerFor } from './power.ts';
 import { alongTrackSpeed } from './wind.ts';
 
 /** Highest Mach number searched: the parabolic polar says nothing about transonic drag. */
@@ -61,11 +61,16 @@ export function levelDrag_N(ctx: SpeedContext, V: number): number {
 }
 
 function rateAt(ctx: SpeedContext, thrustPower_W: number, V: number): number {
-  return consumption(ctx.model.power, ctx.amb.engineMax, thrustPower_W, V);
+  return consumption(ctx.model.power, ctx.amb.engineMax, thrustPower_W, V, ctx.amb.atm.rho_kg_m3);
 }
 
 function availableAt(ctx: SpeedContext, V: number): number {
-  return availablePower_W(ctx.model.power, ctx.amb.engineMax, V);
+  return availablePower_W(ctx.model.power, ctx.amb.engineMax, V, ctx.amb.atm.rho_kg_m3);
+}
+
+/** The propeller's efficiency changes with speed, so the optima are no longer lift coefficients. */
+function variableEfficiency(ctx: SpeedContext): boolean {
+  return ctx.model.power.prop.kind !== 'constant';
 }
 
 /** The lowest speed allowed: settings.stallFactor × V_stall (clean CLmax). */
@@ -115,7 +120,7 @@ function atLiftCoefficient(ctx: SpeedContext, CL: number): SpeedChoice {
 export function bestRangeTas(ctx: SpeedContext): SpeedChoice {
   const hw = ctx.headwind_m_s;
   const cw = ctx.crosswind_m_s;
-  if (hw === 0 && cw === 0) {
+  if (hw === 0 && cw === 0 && !variableEfficiency(ctx)) {
     const power = ctx.model.power;
     if (power.type === 'electric' && power.peukertExponent !== 1) {
       const choice = electricStillAirRange(ctx);
@@ -155,7 +160,10 @@ function electricStillAirRange(ctx: SpeedContext): SpeedChoice | null {
 /** Battery power in level flight at V over the rated discharge power E/Rt. */
 function ratedPowerRatio(ctx: SpeedContext, V: number): number {
   const c = ctx.model.power;
-  return ((levelDrag_N(ctx, V) * V) / c.chainEfficiency) * c.ratedTimeOverEnergy_s_J;
+  const P = levelDrag_N(ctx, V) * V;
+  return (
+    (shaftPowerFor(c, P, V, ctx.amb.atm.rho_kg_m3) / c.driveEfficiency) * c.ratedTimeOverEnergy_s_J
+  );
 }
 
 /** The demand at V is above the idle floor (so consumption follows it). */
@@ -173,6 +181,12 @@ function aboveIdle(ctx: SpeedContext, V: number): boolean {
  * least demand is still taken, so that the choice stays a smooth function of the state.
  */
 export function bestEnduranceTas(ctx: SpeedContext): SpeedChoice {
+  if (variableEfficiency(ctx)) {
+    // Least shaft power D·V/η(V): a search, since η rises with V (propellerCurve.ts).
+    const c = ctx.model.power;
+    const rho = ctx.amb.atm.rho_kg_m3;
+    return choose(ctx, (V) => -shaftPowerFor(c, levelDrag_N(ctx, V) * V, V, rho), true);
+  }
   return atLiftCoefficient(ctx, ctx.model.optimumCL.endurance);
 }
 

@@ -42,7 +42,10 @@ function allowancePower(
   const factor = kind === 'takeoff' ? TAKEOFF_SPEED_FACTOR : APPROACH_SPEED_FACTOR;
   const V = factor * stallTas(model, mass_kg, amb.atm, model.CLmaxFlaps);
   if (kind === 'takeoff') {
-    return { P_W: availableThrustPower_W(model.pp, amb.atm, amb.pressureAltitude_m, V), V_m_s: V };
+    return {
+      P_W: availableThrustPower_W(model.pp, amb.atm, amb.pressureAltitude_m, V, model.power.prop),
+      V_m_s: V,
+    };
   }
   const q = 0.5 * amb.atm.rho_kg_m3 * V * V;
   const CL = (mass_kg * G0) / (q * model.S_m2);
@@ -90,7 +93,9 @@ export function flyAllowance(
     try {
       const amb = ambientAt(model, start.h_m);
       const { P_W, V_m_s } = allowancePower(model, leg.kind, start.mass_kg, start.h_m);
-      amount = consumptionRate(model.pp, P_W, V_m_s, amb.atm, amb.pressureAltitude_m) * a.time_s;
+      amount =
+        consumptionRate(model.pp, P_W, V_m_s, amb.atm, amb.pressureAltitude_m, model.power.prop) *
+        a.time_s;
     } catch (e) {
       return refusedLeg(ctx, leg, start, e instanceof Error ? e.message : String(e));
     }

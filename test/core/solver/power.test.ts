@@ -35,6 +35,36 @@ const powerplants: [string, Powerplant][] = [
   ['propeller, σ^0.8 lapse', propPowerplant({ lapse: { model: 'densityPower', exponent: 0.8 } })],
   ['electric, Peukert 1.25', electricPowerplant({}, { peukertExponent: 1.25 })],
   ['electric, ideal pack', electricPowerplant()],
+  [
+    'propeller, momentum-theory curve',
+    propPowerplant({
+      idlePowerFraction: 0.1,
+      propeller: {
+        model: 'momentum',
+        diameter_m: 1.9,
+        cruiseAltitude_m: 2000,
+        cruisePowerFraction: 0.75,
+        cruiseSpeed_m_s: 60,
+      },
+    }),
+  ],
+  [
+    'electric, η(V) table',
+    electricPowerplant(
+      {
+        propeller: {
+          model: 'table',
+          by: 'airspeed',
+          points: [
+            { x: 5, efficiency: 0.4 },
+            { x: 12, efficiency: 0.7 },
+            { x: 25, efficiency: 0.78 },
+          ],
+        },
+      },
+      { peukertExponent: 1.1 },
+    ),
+  ],
 ];
 
 describe('power.ts agrees with core/propulsion (same models, validated once)', () => {
@@ -50,10 +80,11 @@ describe('power.ts agrees with core/propulsion (same models, validated once)', (
             const atm = atmosphereAt(Hp, 10);
             const max = engineMaximum(pp, atm, Hp);
             // Identical formulas; only the order of a product or two may differ (rounding).
+            const rho = atm.rho_kg_m3;
             const avail = availableThrustPower_W(pp, atm, Hp, V);
-            expect(rel(availablePower_W(c, max, V), avail)).toBeLessThan(1e-14);
+            expect(rel(availablePower_W(c, max, V, rho), avail)).toBeLessThan(1e-14);
             const rate = consumptionRate(pp, P, V, atm, Hp);
-            const mine = consumption(c, max, P, V);
+            const mine = consumption(c, max, P, V, rho);
             if (rate === 0) expect(mine).toBe(0);
             else expect(rel(mine, rate)).toBeLessThan(1e-13);
           },
