@@ -6,6 +6,7 @@
  * endurance come from the solver's own speed schedules (core/solver/speeds.ts), so the marks
  * are the speeds the solver flies, best range in the leg's wind (or the winds-aloft table's).
  */
+import { withMissionWind } from '../solver/missionWind.ts';
 import { InputError } from '../errors.ts';
 import type { Leg, Plan } from '../plan/schema.ts';
 import { courseTrig, crosswindOf, headwindOf } from '../solver/aloft.ts';
@@ -62,10 +63,11 @@ function legWindAt(legPlan: Leg, course: number | undefined, amb: Ambient): Wind
 }
 
 export function powerCurves(
-  plan: Plan,
+  asGiven: Plan,
   legIndex: number,
   options: PowerCurveOptions = {},
 ): PowerCurves {
+  const plan = withMissionWind(asGiven);
   const legPlan = plan.legs[legIndex];
   if (!Number.isInteger(legIndex) || legPlan === undefined) {
     throw new InputError('legIndex', legIndex, `an integer from 0 to ${plan.legs.length - 1}`);

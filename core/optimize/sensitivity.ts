@@ -6,6 +6,7 @@
  * ch. 1 — from memory). Inputs whose change would leave the plan schema's limits are left
  * out rather than clamped.
  */
+import { withMissionWind } from '../solver/missionWind.ts';
 import type { Plan } from '../plan/schema.ts';
 import { PlanSchema } from '../plan/schema.ts';
 import { clonePlan, reserveMargin, solveForSearch } from './planTools.ts';
@@ -155,7 +156,9 @@ function perturbations(plan: Plan): Perturbation[] {
  * Reserve-margin changes for ±5 % of each main input, largest effect first. Units follow
  * the plan's consumable: kg of fuel, or J of usable battery energy.
  */
-export function reserveSensitivity(plan: Plan): SensitivityEntry[] {
+export function reserveSensitivity(asGiven: Plan): SensitivityEntry[] {
+  // The mission wind made explicit per leg, so that scaling the leg winds scales it too.
+  const plan = withMissionWind(asGiven);
   const base = reserveMargin(solveForSearch(plan));
   const entries: SensitivityEntry[] = [];
   for (const pert of perturbations(plan)) {

@@ -8,6 +8,7 @@
  * Introduction to Flight, ch. 6, for the still-air optima), the loiter optimum maximises
  * endurance.
  */
+import { withMissionWind } from '../solver/missionWind.ts';
 import { InputError } from '../errors.ts';
 import type { CruiseLeg, LoiterLeg, Plan } from '../plan/schema.ts';
 import { MACH_CAP } from '../solver/speeds.ts';
@@ -111,10 +112,11 @@ export function legSpeedRange(
  * (maximised); loiter until reserve → time (maximised).
  */
 export function bestSpeedForLeg(
-  plan: Plan,
+  asGiven: Plan,
   legIndex: number,
   options: SpeedSweepOptions = {},
 ): SpeedSweepResult {
+  const plan = withMissionWind(asGiven);
   const leg = requireLeg(plan, legIndex, ['cruise', 'loiter']) as CruiseLeg | LoiterLeg;
   const points = countOption('options.points', options.points, 25, 5);
   const objective = legObjective(leg);

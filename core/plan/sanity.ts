@@ -151,11 +151,26 @@ function powerplantWarnings(plan: Plan, cls: AircraftClass, out: string[]): void
   }
 }
 
+/** A leg set to the mission wind in a plan without one flies its own wind: say so. */
+function windWarnings(plan: Plan, out: string[]): void {
+  const mw = plan.environment.missionWind;
+  plan.legs.forEach((l, i) => {
+    if (!('wind' in l)) return;
+    const source = l.windSource ?? (mw ? 'mission' : 'leg');
+    if (source === 'mission' && mw === undefined) {
+      out.push(
+        `legs.${i}.windSource: 'mission' but the plan has no mission wind; the leg flies its own wind`,
+      );
+    }
+  });
+}
+
 /** Plain-language warnings, each naming the field and the common range. */
 export function planWarnings(plan: Plan): string[] {
   const out: string[] = [];
   const cls = aircraftClass(plan);
   polarWarnings(plan, cls, out);
   powerplantWarnings(plan, cls, out);
+  windWarnings(plan, out);
   return out;
 }

@@ -239,6 +239,16 @@ export const RouteSchema = z.object({
   magneticVariation_deg: bounded(-180, 180, 'deg'),
 });
 
+/**
+ * One wind for the whole mission: a steady wind, or the winds-aloft table. Every leg with a
+ * course uses it unless the leg overrides it (windSource 'leg' or 'aloft'); the runway
+ * surface winds and the launch headwind follow it unless set to their own.
+ */
+export const MissionWindSchema = z.discriminatedUnion('by', [
+  z.object({ by: z.literal('steady'), ...WindSchema.shape }),
+  z.object({ by: z.literal('aloft') }),
+]);
+
 export const EnvironmentSchema = z.object({
   /** Temperature offset from ISA, applied at every pressure altitude. */
   isaOffset_K: bounded(-60, 50, 'K'),
@@ -255,6 +265,8 @@ export const EnvironmentSchema = z.object({
       error: 'wind levels must have distinct altitudes',
     })
     .optional(),
+  /** Optional mission wind (absent in version 1 files: every leg keeps its own wind). */
+  missionWind: MissionWindSchema.optional(),
 });
 
 export const ReservePolicySchema = z.object({
@@ -298,6 +310,8 @@ export const RunwaySchema = z.object({
   /** Magnetic or true runway direction in degrees, the same reference as the surface wind. */
   heading_deg: angle_deg(),
   surfaceWind: WindSchema,
+  /** 'own': surfaceWind; 'mission' (the default when the plan has a mission wind): that wind. */
+  surfaceWindSource: z.enum(['own', 'mission']).optional(),
   /** Outside air temperature at the field; if absent, ISA + environment.isaOffset_K. */
   temperature_K: bounded(200, 340, 'K').optional(),
 });
@@ -309,6 +323,11 @@ export const LaunchSchema = z.object({
   releaseSpeed_m_s: bounded(0, 80, 'm/s', true),
   /** Headwind at the launch point. */
   headwind_m_s: bounded(-20, 30, 'm/s'),
+  /**
+   * 'own': headwind_m_s; 'mission' (the default when the plan has a mission wind): launched
+   * into the mission wind, so its whole speed is headwind (common practice).
+   */
+  headwindSource: z.enum(['own', 'mission']).optional(),
   catapultStroke_m: bounded(0, 50, 'm').optional(),
 });
 
@@ -368,8 +387,12 @@ const legBase = {
 const track = {
   course_deg: angle_deg(),
   wind: WindSchema,
-  /** 'leg' (default): the leg's own wind; 'aloft': the winds-aloft table at each altitude flown. */
-  windSource: z.enum(['leg', 'aloft']).optional(),
+  /**
+   * 'leg': the leg's own wind; 'aloft': the winds-aloft table at each altitude flown;
+   * 'mission': environment.missionWind. Absent: 'mission' when the plan has a mission wind,
+   * otherwise 'leg' (core/solver/missionWind.ts).
+   */
+  windSource: z.enum(['leg', 'aloft', 'mission']).optional(),
   /** With a plan route: the waypoint this leg flies to; course and distance come from the route. */
   toWaypoint: z.string().min(1).max(64).optional(),
 };
@@ -489,6 +512,7 @@ export type Environment = z.infer<typeof EnvironmentSchema>;
 export type ReservePolicy = z.infer<typeof ReservePolicySchema>;
 export type Settings = z.infer<typeof SettingsSchema>;
 export type Wind = z.infer<typeof WindSchema>;
+export type MissionWind = z.infer<typeof MissionWindSchema>;
 export type FixedSpeed = z.infer<typeof FixedSpeedSchema>;
 export type Leg = z.infer<typeof LegSchema>;
 export type LegKind = Leg['kind'];

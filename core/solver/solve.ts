@@ -19,6 +19,7 @@ import { guardResult } from './guard.ts';
 import { baseResult, legName, refusedLeg, type LegContext } from './legs/common.ts';
 import { flyLeg, type LegOutcome } from './legs/index.ts';
 import { searchLoiterConsumption } from './loiterReserve.ts';
+import { withMissionWind } from './missionWind.ts';
 import { reynoldsWarnings } from './reynolds.ts';
 import { buildModel, RELATIVE_TOLERANCE, type FlightModel, type SolveTolerance } from './model.ts';
 import { fmt } from './point.ts';
@@ -64,7 +65,7 @@ export function solvePlan(plan: Plan, options: SolveOptions = {}): PlanResult {
     throw new InputError('tolerance', tolerance, "'precise' or 'fast'");
   }
   try {
-    return guardResult(solveMission(plan, samples, tolerance));
+    return guardResult(solveMission(withMissionWind(plan), samples, tolerance));
   } catch (e) {
     return guardResult(crashedResult(plan, e));
   }

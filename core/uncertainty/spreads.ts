@@ -13,6 +13,7 @@
  * drivetrain efficiency to 3 %; specific fuel consumption to 3 %; battery capacity to 5 %
  * (state of health); take-off loading to 1 % of MTOW.
  */
+import { withMissionWind } from '../solver/missionWind.ts';
 import { requireFinite } from '../errors.ts';
 import type { Leg, Plan, Powerplant } from '../plan/schema.ts';
 import { KT } from '../units.ts';
@@ -146,10 +147,12 @@ function perturbAloft(plan: Plan, s: ReserveSpreads, rng: NormalSource, draws: D
  * the drawn value of every input whose spread is above 0.
  */
 export function perturbPlan(
-  plan: Plan,
+  asGiven: Plan,
   s: ReserveSpreads,
   rng: NormalSource,
 ): { plan: Plan; draws: Draw[] } {
+  // Legs and fields that follow the mission wind get its drawn value through their own.
+  const plan = withMissionWind(asGiven);
   const draws: Draw[] = [];
   const legs = plan.legs.map((leg, i): Leg => {
     const zSpeed = rng.normal();

@@ -86,7 +86,14 @@ export function allFields(plan: Plan): FieldDef[] {
     { type: 'text', path: 'name', label: 'Plan name', maxLength: 120 },
     ...sections.flatMap((s) => s.fields),
     ...plan.legs.flatMap((leg, i) =>
-      legFields(leg, i, plan.aircraft.powerplant.type === 'electric', waypoints, fromRoute.has(i)),
+      legFields(
+        leg,
+        i,
+        plan.aircraft.powerplant.type === 'electric',
+        waypoints,
+        fromRoute.has(i),
+        plan.environment.missionWind !== undefined,
+      ),
     ),
     ...(plan.route
       ? [

@@ -4,6 +4,7 @@
  */
 import type { Plan, Powerplant, Fuel } from '../../../core/plan/schema.ts';
 import { choice, num, text, type FieldDef, type FieldSection } from './fieldTypes.ts';
+import { missionWindFields } from './missionWindFields.ts';
 
 const A = 'aircraft';
 
@@ -219,6 +220,7 @@ export function missionSections(plan: Plan): FieldSection[] {
         num('environment.arrivalElevation_m', 'Arrival elevation', 'altitude', 'm'),
       ],
     },
+    { id: 'missionWind', title: 'Mission wind', fields: missionWindFields(plan) },
     {
       id: 'reserves',
       title: 'Reserve policy',

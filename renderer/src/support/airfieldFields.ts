@@ -5,10 +5,11 @@
  * 1/0.7, launch speed ≥ 1.15 × stall speed); the checks themselves are the solver's
  * (core/solver/fieldChecks.ts).
  */
-import type { Airfield, Plan } from '../../../core/plan/schema.ts';
+import type { Airfield, Plan, Runway } from '../../../core/plan/schema.ts';
 import { SURFACES, type SurfaceId } from '../../../core/field/surfaces.ts';
 import { DEFAULT_CL_GROUND } from '../../../core/field/groundRun.ts';
 import { choice, num, type FieldDef, type FieldSection } from './fieldTypes.ts';
+import { setAtPath } from './paths.ts';
 
 /** Common-practice factors (see the schema comments in core/plan/schema.ts). */
 export const FIELD_FACTORS = { takeoffFactor: 1.15, landingFactor: 1.43, launchFactor: 1.15 };
@@ -60,16 +61,44 @@ const SURFACE_OPTIONS = (Object.keys(SURFACES) as SurfaceId[]).map((id) => ({
   label: SURFACES[id].label,
 }));
 
-function runwayFields(p: string): FieldDef[] {
+/**
+ * With a mission wind the field wind follows it unless set to its own (the absent source
+ * means 'mission', core/solver/missionWind.ts); the own-wind boxes show only when used.
+ */
+function followsMission(plan: Plan, path: string, label: string, own: string | undefined) {
+  if (plan.environment.missionWind === undefined) return { fields: [], own: true };
+  const pick: FieldDef = {
+    ...choice(path, label, [
+      { value: 'mission', label: 'Mission wind' },
+      { value: 'own', label: 'Own value' },
+    ]),
+    fallback: 'mission',
+    apply: (pl: Plan, v: string) => setAtPath(pl, path, v === 'mission' ? undefined : v),
+  };
+  return { fields: [pick], own: own === 'own' };
+}
+
+function runwayFields(plan: Plan, p: string, end: Runway | undefined): FieldDef[] {
+  const wind = followsMission(
+    plan,
+    `${p}.surfaceWindSource`,
+    'Surface wind',
+    end?.surfaceWindSource,
+  );
   return [
     num(`${p}.available_m`, 'Runway available', 'shortDistance', 'm'),
     choice(`${p}.surface`, 'Surface', SURFACE_OPTIONS),
     num(`${p}.slope`, 'Slope (+ uphill)', 'ratio', 'fraction'),
     num(`${p}.heading_deg`, 'Runway direction', 'angle', 'deg'),
-    num(`${p}.surfaceWind.speed_m_s`, 'Surface wind speed', 'airspeed', 'm_s'),
-    num(`${p}.surfaceWind.from_deg`, 'Surface wind from', 'angle', 'deg', {
-      hint: 'same north as the runway direction',
-    }),
+    ...wind.fields,
+    ...(wind.own
+      ? [
+          num(`${p}.surfaceWind.speed_m_s`, 'Surface wind speed', 'airspeed', 'm_s'),
+          num(`${p}.surfaceWind.from_deg`, 'Surface wind from', 'angle', 'deg', {
+            hint: 'same north as the runway direction',
+          }),
+        ]
+      : []),
     num(`${p}.temperature_K`, 'Outside air temperature', 'temperature', 'K', {
       optional: true,
       hint: 'empty: ISA with the plan’s deviation',
@@ -95,18 +124,23 @@ function endFields(plan: Plan, end: End): FieldDef[] {
     fallback: 'none',
     apply: (pl: Plan, by: string) => withAirfieldEnd(pl, end, by),
   };
-  const kind = plan.airfield?.[end].by ?? 'none';
-  if (kind === 'runway') return [pick, ...runwayFields(p)];
-  if (kind === 'launch')
+  const value = plan.airfield?.[end];
+  const kind = value?.by ?? 'none';
+  if (kind === 'runway') return [pick, ...runwayFields(plan, p, value as Runway)];
+  if (kind === 'launch') {
+    const source = value?.by === 'launch' ? value.headwindSource : undefined;
+    const wind = followsMission(plan, `${p}.headwindSource`, 'Launch headwind', source);
     return [
       pick,
       num(`${p}.releaseSpeed_m_s`, 'Release ground speed', 'airspeed', 'm_s'),
-      num(`${p}.headwind_m_s`, 'Headwind at launch', 'airspeed', 'm_s'),
+      ...wind.fields,
+      ...(wind.own ? [num(`${p}.headwind_m_s`, 'Headwind at launch', 'airspeed', 'm_s')] : []),
       num(`${p}.catapultStroke_m`, 'Catapult stroke', 'shortDistance', 'm', {
         optional: true,
         hint: 'optional',
       }),
     ];
+  }
   return [pick];
 }
 

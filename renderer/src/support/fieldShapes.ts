@@ -37,7 +37,20 @@ export function aircraftShape(plan: Plan): string {
 
 export function airfieldShape(plan: Plan): string {
   const a = plan.airfield;
-  return a ? `${a.departure.by}|${a.arrival.by}` : '';
+  if (!a) return '';
+  const own = (end: NonNullable<Plan['airfield']>['departure']) =>
+    end.by === 'runway'
+      ? (end.surfaceWindSource ?? '')
+      : end.by === 'launch'
+        ? (end.headwindSource ?? '')
+        : '';
+  const mission = plan.environment.missionWind?.by ?? '';
+  return `${a.departure.by}|${a.arrival.by}|${mission}|${own(a.departure)}|${own(a.arrival)}`;
+}
+
+/** The mission sections change with the consumable and the kind of mission wind. */
+export function missionShape(plan: Plan): string {
+  return `${isElectric(plan)}|${plan.environment.missionWind?.by ?? ''}`;
 }
 
 export function legShape(
@@ -45,10 +58,12 @@ export function legShape(
   index: number,
   electric: boolean,
   waypoints: readonly WaypointData[] = [],
+  routeDistance = false,
+  missionWind = false,
 ): string {
-  const parts: unknown[] = [index, electric, leg.kind];
+  const parts: unknown[] = [index, electric, leg.kind, routeDistance];
   if ('wind' in leg) {
-    parts.push(leg.windSource ?? 'leg', leg.toWaypoint ? 'to' : '');
+    parts.push(leg.windSource ?? '', missionWind, leg.toWaypoint ? 'to' : '');
     parts.push(waypoints.map((w) => `${w.id}:${w.name}`).join(','));
   }
   if (leg.kind === 'takeoff' || leg.kind === 'landing') parts.push(leg.allowance.by);
@@ -72,11 +87,12 @@ export function createFieldMemos(): {
     electric: boolean,
     waypoints?: readonly WaypointData[],
     routeDistance?: boolean,
+    missionWind?: boolean,
   ) => FieldDef[];
 } {
   return {
     aircraft: lastKeyMemo(aircraftShape, aircraftSections),
-    mission: lastKeyMemo((p: Plan) => String(isElectric(p)), missionSections),
+    mission: lastKeyMemo(missionShape, missionSections),
     airfield: lastKeyMemo(
       (p: Plan) => `${airfieldShape(p)}|${p.aircraft.powerplant.type === 'jet'}`,
       (p: Plan) => [...airfieldSections(p), fieldDataSection(p)],

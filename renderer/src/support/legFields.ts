@@ -59,7 +59,7 @@ function speedFields(
   return fields;
 }
 
-type Track = { windSource?: 'leg' | 'aloft'; toWaypoint?: string };
+type Track = { windSource?: 'leg' | 'aloft' | 'mission'; toWaypoint?: string };
 
 /** A choice whose default value is stored as an absent key (the plan file stays lean). */
 function optionalChoice(
@@ -84,21 +84,29 @@ function targetField(p: string, waypoints: readonly WaypointData[]): FieldDef[] 
   return [optionalChoice(`${p}.toWaypoint`, 'Flies to waypoint', options, '')];
 }
 
-function trackFields(p: string, leg: Track, waypoints: readonly WaypointData[]): FieldDef[] {
+/**
+ * Course and wind. With a mission wind (environment.missionWind) a leg follows it unless it
+ * overrides it: the absent windSource then means 'mission' (core/solver/missionWind.ts).
+ */
+function trackFields(
+  p: string,
+  leg: Track,
+  waypoints: readonly WaypointData[],
+  missionWind: boolean,
+): FieldDef[] {
   const fields: FieldDef[] = [...targetField(p, waypoints)];
   if (!leg.toWaypoint) fields.push(num(`${p}.course_deg`, 'Track (° true)', 'angle', 'deg'));
-  fields.push(
-    optionalChoice(
-      `${p}.windSource`,
-      'Wind',
-      [
-        { value: 'leg', label: 'Own wind for this leg' },
-        { value: 'aloft', label: 'Winds-aloft table' },
-      ],
-      'leg',
-    ),
-  );
-  if (leg.windSource !== 'aloft')
+  const absent = missionWind ? 'mission' : 'leg';
+  const options: ChoiceOption[] = [
+    { value: 'leg', label: 'Own wind for this leg' },
+    { value: 'aloft', label: 'Winds-aloft table' },
+  ];
+  if (missionWind || leg.windSource === 'mission') {
+    options.unshift({ value: 'mission', label: 'Mission wind' });
+  }
+  fields.push(optionalChoice(`${p}.windSource`, 'Wind', options, absent));
+  const source = leg.windSource ?? absent;
+  if (source === 'leg')
     fields.push(
       num(`${p}.wind.speed_m_s`, 'Wind speed', 'airspeed', 'm_s'),
       num(`${p}.wind.from_deg`, 'Wind from (° true)', 'angle', 'deg'),
@@ -147,6 +155,7 @@ export function legFields(
   electric = false,
   waypoints: readonly WaypointData[] = [],
   routeDistance = false,
+  missionWind = false,
 ): FieldDef[] {
   const p = `legs.${index}`;
   const label = text(`${p}.label`, 'Label');
@@ -160,7 +169,7 @@ export function legFields(
         num(`${p}.toAltitude_m`, 'Climb to altitude', 'altitude', 'm'),
         ...speedFields(`${p}.speed`, { value: 'bestRate', label: 'Best rate of climb' }, leg.speed),
         num(`${p}.throttle`, 'Throttle (of max)', 'ratio', 'fraction'),
-        ...trackFields(p, leg, waypoints),
+        ...trackFields(p, leg, waypoints, missionWind),
       ];
     case 'cruise':
       return [
@@ -198,7 +207,7 @@ export function legFields(
           { value: 'constantAltitude', label: 'Constant altitude' },
           { value: 'cruiseClimb', label: 'Cruise-climb (constant CL)' },
         ]),
-        ...trackFields(p, leg, waypoints),
+        ...trackFields(p, leg, waypoints, missionWind),
       ];
     case 'loiter':
       return [
@@ -218,7 +227,7 @@ export function legFields(
           { value: 'bestEndurance', label: 'Best endurance' },
           leg.speed,
         ),
-        ...trackFields(p, leg, waypoints),
+        ...trackFields(p, leg, waypoints, missionWind),
       ];
     case 'descent':
       return [
@@ -242,7 +251,7 @@ export function legFields(
               ...speedFields(`${p}.mode.speed`, null, leg.mode.speed),
             ]
           : []),
-        ...trackFields(p, leg, waypoints),
+        ...trackFields(p, leg, waypoints, missionWind),
       ];
   }
 }
