@@ -13,9 +13,14 @@
  *  7. CLI batch mode: `legwise solve FILE...` in one process over 1000 copies of the 12-leg
  *     plan file — read, strict decode, validate, solve, one NDJSON row each (target ≥ 500
  *     plans/s on one core).
+ *  8. GPX import of a 190 000-point logger track (elevation and time on every point) in a
+ *     child process under an 80 MB heap limit (targets ≤ 0.3 s, ≤ 80 MB).
  * Timings use performance.now(); they depend on the machine and are printed, never asserted.
  */
-import { existsSync, readdirSync, readFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { rangeJetCruiseClimb } from '../core/breguet.ts';
 import { bestCruiseAltitude } from '../core/optimize/altitudeSweep.ts';
@@ -36,6 +41,7 @@ import { solvePlan } from '../core/solver/solve.ts';
 import { reserveMonteCarlo } from '../core/uncertainty/reserveMonteCarlo.ts';
 import { spreadsFromDefaults } from '../core/uncertainty/spreads.ts';
 import { G0 } from '../core/units.ts';
+import { loggerTrackGpx } from '../test/support/gpxSynth.ts';
 
 const TARGET_SOLVE_MS = 2;
 const TARGET_SWEEP_MS = 150;
@@ -43,6 +49,9 @@ const TARGET_MONTE_CARLO_MS = 1000;
 const MONTE_CARLO_SAMPLES = 2000;
 const TARGET_BATCH_PLANS_S = 500;
 const BATCH_FILES = 1000;
+const TARGET_GPX_MS = 300;
+const TARGET_GPX_MB = 80;
+const GPX_POINTS = 190_000;
 
 function stats(samples: number[]): { median: number; p90: number; min: number } {
   const s = [...samples].sort((a, b) => a - b);
@@ -441,6 +450,49 @@ function benchBatch(): void {
   );
 }
 
+function benchGpx(): void {
+  const dir = mkdtempSync(join(tmpdir(), 'legwise-bench-'));
+  try {
+    const file = join(dir, 'logger.gpx');
+    writeFileSync(file, loggerTrackGpx(GPX_POINTS, 5, { climbBias: 0.5, stepScale: 0.2 }));
+    const child = spawnSync(
+      process.execPath,
+      [
+        `--max-old-space-size=${TARGET_GPX_MB}`,
+        '--import',
+        'tsx',
+        fileURLToPath(new URL('./gpxBench.ts', import.meta.url)),
+        file,
+      ],
+      { encoding: 'utf8' },
+    );
+    console.log(
+      `8. GPX import: ${GPX_POINTS} logger track points with ele and time, one-pass reader, child process with a ${TARGET_GPX_MB} MB heap limit, median of 3`,
+    );
+    if (child.status !== 0) {
+      console.log(
+        `   did not finish (exit ${child.status}): ${child.stderr.trim().split('\n').pop()}  MISS`,
+      );
+      return;
+    }
+    const r = JSON.parse(child.stdout.trim().split('\n').pop() ?? '{}') as {
+      median_ms: number;
+      cpuPerParse_ms: number;
+      waypoints: number;
+      peakAbove_MB: number;
+      text_MB: number;
+    };
+    console.log(
+      `   median ${ms(r.median_ms)}   target ≤ ${TARGET_GPX_MS} ms: ${verdict(r.median_ms <= TARGET_GPX_MS)} (CPU ${ms(r.cpuPerParse_ms)} per parse); ${r.waypoints} waypoints`,
+    );
+    console.log(
+      `   peak memory above the process's start ${r.peakAbove_MB.toFixed(0)} MB (the ${r.text_MB.toFixed(0)} MB text included)   target ≤ ${TARGET_GPX_MB} MB: ${verdict(r.peakAbove_MB <= TARGET_GPX_MB)}`,
+    );
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 function main(): void {
   const { plan, source } = loadTwelveLegs();
   console.log(`Legwise benchmark — Node ${process.version}, ${process.platform}/${process.arch}\n`);
@@ -451,6 +503,7 @@ function main(): void {
   benchExamples();
   benchMonteCarlo(plan, source);
   benchBatch();
+  benchGpx();
 }
 
 main();

@@ -97,11 +97,15 @@ export function sphericalDistance_m(
 ): number {
   checkLatLon(a, fields.a ?? 'from');
   checkLatLon(b, fields.b ?? 'to');
-  const dLat = (b.lat_deg - a.lat_deg) * DEG;
-  const dLon = (b.lon_deg - a.lon_deg) * DEG;
+  return haversine_m(a.lat_deg, a.lon_deg, b.lat_deg, b.lon_deg);
+}
+
+/** The haversine kernel for coordinates already checked (track thinning's inner loop). */
+export function haversine_m(lat1: number, lon1: number, lat2: number, lon2: number): number {
+  const dLat = (lat2 - lat1) * DEG;
+  const dLon = (lon2 - lon1) * DEG;
   const h =
-    Math.sin(dLat / 2) ** 2 +
-    Math.cos(a.lat_deg * DEG) * Math.cos(b.lat_deg * DEG) * Math.sin(dLon / 2) ** 2;
+    Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * DEG) * Math.cos(lat2 * DEG) * Math.sin(dLon / 2) ** 2;
   return 2 * MEAN_EARTH_RADIUS_M * Math.asin(Math.min(1, Math.sqrt(h)));
 }
 

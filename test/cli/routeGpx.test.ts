@@ -1,6 +1,6 @@
 /**
  * `legwise solve --gpx FILE` end to end: the route written as GPX 1.1 with each waypoint's
- * estimate, read back with the project's GPX parser (core/route/gpx.ts, fast-xml-parser) and
+ * estimate, read back with the project's GPX parser (core/route/gpx.ts) and
  * compared with the solver's own per-waypoint estimates (routeProgress): the CLI must write
  * what the solver computed, not recompute it. Also the route table of the text output and
  * the refusals (no route, wrong command, unwritable file).

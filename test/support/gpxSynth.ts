@@ -16,7 +16,15 @@ function lcg(seed: number): () => number {
 }
 
 /** A track of n points from (47, 8) heading north-east, about 30 m apart, 5 % repeats. */
-export function loggerTrackGpx(n: number, seed = 1): string {
+/**
+ * Options for very long tracks: `climbBias` 0.5 makes the elevation a walk without drift,
+ * `stepScale` shortens the steps so the track stays on the globe.
+ */
+export function loggerTrackGpx(
+  n: number,
+  seed = 1,
+  { climbBias = 0.45, stepScale = 1 }: { climbBias?: number; stepScale?: number } = {},
+): string {
   const rnd = lcg(seed);
   const parts = [
     '<?xml version="1.0" encoding="UTF-8"?>',
@@ -31,9 +39,9 @@ export function loggerTrackGpx(n: number, seed = 1): string {
   for (let i = 0; i < n; i++) {
     if (i === Math.floor(n / 2)) parts.push('</trkseg><trkseg>');
     if (i > 0 && rnd() >= 0.05) {
-      lat += 0.0002 + 0.0001 * rnd();
-      lon += 0.0001 + 0.0002 * (rnd() - 0.3);
-      ele += 4 * (rnd() - 0.45);
+      lat += stepScale * (0.0002 + 0.0001 * rnd());
+      lon += stepScale * (0.0001 + 0.0002 * (rnd() - 0.3));
+      ele += 4 * (rnd() - climbBias);
     }
     const time = new Date(t0 + i * 1000).toISOString().replace('.000', '');
     parts.push(
