@@ -6,7 +6,7 @@
  * parseWindsText, solvePlan, the Monte Carlo aggregation), so the page must show what the
  * core computes.
  */
-import { mkdirSync, readFileSync, statSync } from 'node:fs';
+import { mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -17,6 +17,7 @@ import { spreadsFromDefaults } from '../../core/uncertainty/spreads.ts';
 import { createConfidenceRun } from '../../renderer/src/support/confidence.ts';
 import { keptSentence } from '../../renderer/src/support/confidenceText.ts';
 import { examplePlan } from '../renderer/fixtures.ts';
+import { loggerTrackGpx } from '../support/gpxSynth.ts';
 import { haveChromium, openPlanner, unlabelledControls, type PlannerPage } from './harness.ts';
 
 const SHOTS = new URL('../../artifacts/screenshots/', import.meta.url);
@@ -65,11 +66,38 @@ describe.runIf(haveChromium || !!process.env.CI)(
       expect(await page.locator(byTestId('waypoint-row')).count()).toBe(0);
     });
 
+    it('a large logger file shows its progress and can be cancelled, leaving the route as it was', async () => {
+      const big = fileURLToPath(new URL('logger-190k.gpx', ARTIFACTS));
+      mkdirSync(fileURLToPath(ARTIFACTS), { recursive: true });
+      writeFileSync(big, loggerTrackGpx(190_000, 5, { climbBias: 0.5, stepScale: 0.2 }));
+      await page.setInputFiles(byTestId('gpx-file'), big);
+      const progress = page.locator(byTestId('gpx-progress'));
+      await expect(progress.innerText()).resolves.toMatch(/^Reading logger-190k\.gpx … \d+ %/);
+      await page.click(byTestId('gpx-cancel'));
+      await expect(page.locator(byTestId('route-note')).innerText()).resolves.toBe(
+        'Import of logger-190k.gpx cancelled; the route is unchanged.',
+      );
+      expect(await page.locator(byTestId('waypoint-row')).count()).toBe(0);
+      // Read to the end this time: the track thinned to at most 100 waypoints (core/route/gpx.ts).
+      await page.setInputFiles(byTestId('gpx-file'), big);
+      await expect(
+        page.locator(byTestId('route-note')).innerText({ timeout: 30_000 }),
+      ).resolves.toMatch(/^\d+ waypoints read from logger-190k\.gpx/);
+      const n = await page.locator(byTestId('waypoint-row')).count();
+      expect(n).toBeGreaterThan(50);
+      expect(n).toBeLessThanOrEqual(100);
+      await page.click(byTestId('route-remove'));
+    });
+
     it('imports a GPX route, shows its waypoints and builds a leg to each', async () => {
       await page.setInputFiles(byTestId('gpx-file'), GPX);
       const read = parseGpx(readFileSync(GPX, 'utf8'));
       if (!read.ok) throw new Error('the fixture must be read');
       const rows = page.locator(byTestId('waypoint-row'));
+      // The file is read in a worker: wait for the note that says it is done.
+      await expect(page.locator(byTestId('route-note')).innerText()).resolves.toContain(
+        `${read.route.waypoints.length} waypoints read`,
+      );
       await expect(rows.count()).resolves.toBe(read.route.waypoints.length);
       const names = await rows.evaluateAll((trs) =>
         trs.map((tr) => (tr.querySelector('input') as HTMLInputElement).value),
