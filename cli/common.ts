@@ -29,7 +29,8 @@ export interface CliIo {
 /** Printed with every result: these are estimates, never a substitute for approved data. */
 export const CAUTION =
   "CAUTION: Estimates for planning only. The aircraft's approved documents, local regulations " +
-  'and licensed practice take precedence.';
+  'and licensed practice take precedence. The reserve rule (by default a final reserve time at ' +
+  'normal cruise) is common practice; local regulations set the rule that applies.';
 
 export interface OutputOptions {
   units: UnitSystemId;

@@ -11,7 +11,13 @@ import {
   unitLabel,
 } from '../core/format.ts';
 import type { Plan } from '../core/plan/schema.ts';
-import { checkFigures, describeCheck } from '../core/solver/describe.ts';
+import {
+  checkFigures,
+  describeCheck,
+  describeMargin,
+  describeReserveProblem,
+  minutesText,
+} from '../core/solver/describe.ts';
 import { routeProgress } from '../core/solver/routeProgress.ts';
 import type { CheckState, LegResult, PlanResult, Span } from '../core/solver/types.ts';
 import type { ReserveMonteCarloResult } from '../core/uncertainty/reserveMonteCarlo.ts';
@@ -120,7 +126,7 @@ function checkRows(result: PlanResult, units: UnitSystemId): string[][] {
       STATE_WORD[c.state],
       c.label,
       `${value} / ${limit}`,
-      formatQuantity(c.margin, 'ratio', units, { signed: true }),
+      describeMargin(c, units),
       describeCheck(c, units),
     ];
   });
@@ -140,6 +146,41 @@ function chargeWords(plan: Plan, result: PlanResult, units: UnitSystemId): strin
       ? `; pack at ${formatQuantity(1 - pp.battery.usableFraction * (1 - soc), 'ratio', units)} of nominal`
       : '';
   return ` (${formatQuantity(soc, 'ratio', units)} of usable energy${pack})`;
+}
+
+/**
+ * The reserve in time as well as amount: the final reserve's rule, altitude and time, the
+ * required and remaining amounts as minutes at its rate; or why it cannot be flown.
+ */
+export function reserveLines(result: PlanResult, units: UnitSystemId): string[] {
+  const r = result.reserve;
+  const c = consumableQuantity(result);
+  const f = r.final;
+  const out: string[] = [];
+  const rule = f.rule === 'normalCruise' ? 'normal cruise' : 'best endurance';
+  if (f.time_s > 0) {
+    const where = f.level === 'lastCruise' ? 'the last cruise altitude' : 'the hold altitude';
+    const speed =
+      f.rule === 'normalCruise'
+        ? f.cruiseLegIndex >= 0
+          ? ` (speed of leg ${f.cruiseLegIndex + 1})`
+          : ' (no cruise leg: best range)'
+        : '';
+    out.push(
+      `Final reserve: ${minutesText(f.time_s)} at ${rule}${speed}, ${formatQuantity(f.altitude_m, 'altitude', units)} (${where})` +
+        (r.problems.length === 0
+          ? `: ${formatQuantity(f.timed, c, units)}, climb to it ${formatQuantity(f.climb, c, units)}.`
+          : '.'),
+    );
+  }
+  for (const p of r.problems)
+    out.push(`  ! reserve cannot be flown: ${describeReserveProblem(p, units)}`);
+  if (r.problems.length === 0 && r.requiredTime_s > 0) {
+    out.push(
+      `In time at ${rule}: required ${minutesText(r.requiredTime_s)}, on landing ${minutesText(r.remainingTime_s)}.`,
+    );
+  }
+  return out;
 }
 
 export function verdictLine(result: PlanResult): string {
@@ -184,6 +225,7 @@ export function renderSolveText(
     `On landing: ${formatQuantity(result.landing.remaining, c, units)} left${soc}; reserve required ` +
       `${formatQuantity(result.reserve.required.total, c, units)} — ${result.reserve.kept ? 'kept' : 'NOT kept'}.`,
   );
+  lines.push(...reserveLines(result, units));
   lines.push('');
   lines.push('Checks');
   const checkColumns: Column[] = [

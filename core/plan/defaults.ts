@@ -75,6 +75,8 @@ export function newPlan(): Plan {
   const legs: Leg[] = (
     ['takeoff', 'climb', 'cruise', 'loiter', 'cruise', 'descent', 'landing'] as const
   ).map((kind, i) => defaultLeg(kind, `leg-${i + 1}`));
+  // The last descent reaches the arrival field (0 m), so the mission ends where it lands.
+  for (const leg of legs) if (leg.kind === 'descent') leg.toAltitude_m = 0;
   return {
     format: PLAN_FORMAT,
     schemaVersion: PLAN_SCHEMA_VERSION,
@@ -85,7 +87,7 @@ export function newPlan(): Plan {
       name: 'Small electric UAV (example)',
       wingArea_m2: 0.9,
       polar: { CD0: 0.032, induced: { by: 'geometry', e: 0.8, AR: 10 }, CLminD: 0.05, CLmax: 1.3 },
-      mass: { empty_kg: 7, payload_kg: 1, mtow_kg: 12 },
+      mass: { empty_kg: 7, payload_kg: 1, mtow_kg: 13 },
       ceiling_m: 3000,
       powerplant: {
         type: 'electric',
@@ -111,6 +113,9 @@ export function newPlan(): Plan {
     reserves: {
       holdTime_s: 600,
       holdAltitude_m: 150,
+      // A small UAV holds low: 100 m above the field rather than the 300 m default of
+      // manned aircraft (common practice).
+      minHeightAboveField_m: 100,
       contingencyFraction: 0.1,
       alternateDistance_m: 0,
       alternateAltitude_m: 150,

@@ -269,10 +269,29 @@ export const EnvironmentSchema = z.object({
   missionWind: MissionWindSchema.optional(),
 });
 
+/** Least height of the reserve hold and alternate above the arrival field when a plan sets none (about 1000 ft, common practice). */
+export const DEFAULT_MIN_HEIGHT_ABOVE_FIELD_M = 300;
+
 export const ReservePolicySchema = z.object({
-  /** Time to hold at best-endurance speed at the hold altitude (final reserve). */
+  /**
+   * Final reserve: a time flown at the speed of `finalReserveSpeed`, at the altitude of
+   * `finalReserveLevel` (core/solver/finalReserve.ts).
+   */
   holdTime_s: bounded(0, 6 * 3600, 's'),
   holdAltitude_m: bounded(-400, 15_000, 'm'),
+  /**
+   * 'normalCruise' (default when absent): the plan's cruise speed schedule (that of its last
+   * cruise leg), as operators state a final reserve (common practice, e.g. 14 CFR 91.151(a));
+   * 'bestEndurance': the speed of least consumption per unit time.
+   */
+  finalReserveSpeed: z.enum(['normalCruise', 'bestEndurance']).optional(),
+  /** 'holdAltitude' (default when absent): at holdAltitude_m; 'lastCruise': where the last cruise leg starts. */
+  finalReserveLevel: z.enum(['holdAltitude', 'lastCruise']).optional(),
+  /**
+   * Least height of the hold and of the alternate above the arrival field (default 300 m,
+   * about 1000 ft, common practice); lower ones fail the reserve check.
+   */
+  minHeightAboveField_m: bounded(0, 3000, 'm').optional(),
   /** Contingency as a fraction of trip fuel or energy. */
   contingencyFraction: fraction(0, 0.5),
   /** Distance to an alternate, flown at best range at the alternate altitude. */
@@ -289,6 +308,11 @@ export const SettingsSchema = z.object({
   tightMargin: fraction(0, 0.5),
   /** Rate of climb that defines the service ceiling (0.5 m/s common practice). */
   minClimbRate_m_s: bounded(0, 10, 'm/s'),
+  /**
+   * How far the end of the last leg may lie from the arrival elevation (default 30 m, about
+   * 100 ft, when absent) before the mission-shape check fails.
+   */
+  arrivalTolerance_m: bounded(0, 1000, 'm').optional(),
 });
 
 /** Runway surface; friction coefficients in core/field/surfaces.ts (common practice). */

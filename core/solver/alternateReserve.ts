@@ -21,9 +21,11 @@
  * speed at each altitude as a headwind (the direction to the alternate is not in the plan).
  */
 import type { ReservePolicy } from '../plan/schema.ts';
+import { segmentProblem } from './reserveProblems.ts';
 import type { FlightModel } from './model.ts';
-import { fmt, type FlightPath, type SpeedSchedule } from './point.ts';
+import type { FlightPath, SpeedSchedule } from './point.ts';
 import { flySegment, type MissionState, type SegmentOutcome, type SegmentSpec } from './segment.ts';
+import type { ReserveProblem } from './types.ts';
 
 /** Tries of the proportional rule for an alternate too short to reach its altitude. */
 const MAX_TOP_TRIALS = 4;
@@ -33,9 +35,9 @@ const MIN_CLIMB_M = 1;
 export interface AlternateOutcome {
   /** Consumption of the whole profile: fuel kg or usable battery energy J. */
   amount: number;
-  /** False when a part could not be flown (the warning says why). */
+  /** False when a part could not be flown (`problem` says why). */
   computed: boolean;
-  warnings: string[];
+  problem: ReserveProblem | null;
   /** The top of the profile and the consumption of each part (for reports and tests). */
   top_m: number;
   climb: number;
@@ -75,7 +77,7 @@ export function alternateReserve(
   const out: AlternateOutcome = {
     amount: 0,
     computed: true,
-    warnings: [],
+    problem: null,
     top_m: policy.alternateAltitude_m,
     climb: 0,
     cruise: 0,
@@ -86,31 +88,21 @@ export function alternateReserve(
     const seg = flySegment(model, { ...spec, samples: 0 }, from);
     if (seg.stoppedBy === null) return seg;
     out.computed = false;
-    const why =
-      seg.stoppedBy === 'climb'
-        ? `cannot climb above ${fmt(seg.end.h_m)} m: the rate of climb falls below ${fmt(spec.minClimbRate_m_s ?? 0)} m/s`
-        : seg.message;
-    out.warnings.push(`Reserve alternate: could not be computed (${why}).`);
+    out.problem = segmentProblem('alternate', seg, Math.max(spec.minClimbRate_m_s ?? 0, 0.01));
     return null;
   };
   const used = (a: MissionState, b: MissionState) => a.left - b.left;
-  const cruiseAt = (h_m: number, from: MissionState, distance_m: number) => {
-    const seg = fly(
+  // Power is watched: a cruise that cannot be flown level is a reserve that cannot be flown.
+  const cruiseAt = (h_m: number, from: MissionState, distance_m: number) =>
+    fly(
       {
         path: reservePath(model, 'alternate', { kind: 'bestRange' }, { kind: 'level' }, true),
         indep: 'x',
         to: from.x_m + distance_m,
-        limits: [],
+        limits: ['power'],
       },
       { ...from, h_m },
     );
-    if (seg !== null && seg.stats.worstPowerMargin < 0) {
-      out.warnings.push(
-        `Reserve alternate: needs ${fmt(seg.stats.worstPowerRequired_W)} W of thrust power at ${fmt(h_m)} m, more than the ${fmt(seg.stats.worstPowerAvailable_W)} W available.`,
-      );
-    }
-    return seg;
-  };
   const glideFrom = (from: MissionState) =>
     fly(
       {

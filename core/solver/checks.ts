@@ -9,14 +9,14 @@
  * Margin: (limit − value)/limit for upper limits, (value − limit)/limit for lower ones;
  * fails below 0, tight below settings.tightMargin.
  */
-import type { Plan } from '../plan/schema.ts';
+import type { Leg, Plan } from '../plan/schema.ts';
 import { fuelDensity_kg_L } from '../propulsion/index.ts';
 import type { LegOutcome } from './legs/index.ts';
 import { legName } from './legs/common.ts';
 import type { FlightModel } from './model.ts';
 import { fmt } from './point.ts';
 import { LIMIT_TOLERANCE } from './segment.ts';
-import type { Check, CheckState } from './types.ts';
+import type { Check, CheckState, FinalReserveSummary, ReserveProblem } from './types.ts';
 
 export interface CheckInput {
   id: string;
@@ -40,6 +40,11 @@ export interface CheckInput {
   incomplete?: boolean;
   thrustRequired_N?: number;
   thrustAvailable_N?: number;
+  reserveProblems?: ReserveProblem[];
+  reserveTime?: Check['reserveTime'];
+  chosenSpeed?: Check['chosenSpeed'];
+  legIndices?: number[];
+  orderProblems?: Check['orderProblems'];
 }
 
 export function makeCheck(c: CheckInput, tight: number): Check {
@@ -47,8 +52,14 @@ export function makeCheck(c: CheckInput, tight: number): Check {
   const scale = c.reference > 1e-9 ? c.reference : 1;
   const ref = Math.max(Math.abs(c.limit), 1e-6 * scale);
   const margin = c.margin ?? (c.bound === 'max' ? c.limit - c.value : c.value - c.limit) / ref;
-  const state: CheckState =
-    c.fails || margin < -LIMIT_TOLERANCE ? 'fails' : margin < tight ? 'tight' : 'ok';
+  // A speed the planner chose keeps the stall margin by construction: information only.
+  const state: CheckState = c.chosenSpeed
+    ? 'ok'
+    : c.fails || margin < -LIMIT_TOLERANCE
+      ? 'fails'
+      : margin < tight
+        ? 'tight'
+        : 'ok';
   // Built field by field: a rest-spread copy is several times slower in V8 and leaves an
   // object shape that later walks (guard.ts) are slow on.
   const check: Check = {
@@ -68,6 +79,11 @@ export function makeCheck(c: CheckInput, tight: number): Check {
   if (c.incomplete) check.incomplete = true;
   if (c.thrustRequired_N !== undefined) check.thrustRequired_N = c.thrustRequired_N;
   if (c.thrustAvailable_N !== undefined) check.thrustAvailable_N = c.thrustAvailable_N;
+  if (c.reserveProblems !== undefined) check.reserveProblems = c.reserveProblems;
+  if (c.reserveTime !== undefined) check.reserveTime = c.reserveTime;
+  if (c.chosenSpeed !== undefined) check.chosenSpeed = c.chosenSpeed;
+  if (c.legIndices !== undefined) check.legIndices = c.legIndices;
+  if (c.orderProblems !== undefined) check.orderProblems = c.orderProblems;
   return check;
 }
 
@@ -75,6 +91,12 @@ export interface MissionSummary {
   completed: boolean;
   remaining: number;
   requiredReserve: number;
+  /** Why the reserve cannot be computed or flown (the reserve check then fails). */
+  problems: readonly ReserveProblem[];
+  final: FinalReserveSummary;
+  /** Required and remaining as time at the final reserve's rate (0: not known). */
+  requiredTime_s: number;
+  remainingTime_s: number;
 }
 
 export function missionChecks(
@@ -125,11 +147,16 @@ export function missionChecks(
     quantity: fuel ? 'fuelMass' : 'energy',
     bound: 'min',
     reference: model.consumableStart,
-    fails: !mission.completed,
+    fails: !mission.completed || mission.problems.length > 0,
     incomplete: !mission.completed,
-    detail: mission.completed
-      ? `On landing ${fmt(mission.remaining)} ${unit} left against ${fmt(mission.requiredReserve)} ${unit} of reserve required.`
-      : `The mission is not completed; ${fmt(mission.remaining)} ${unit} left where it stops, ${fmt(mission.requiredReserve)} ${unit} of reserve required.`,
+    reserveProblems: [...mission.problems],
+    reserveTime: {
+      final_s: mission.final.time_s,
+      rule: mission.final.rule,
+      required_s: mission.requiredTime_s,
+      remaining_s: mission.remainingTime_s,
+    },
+    detail: reserveDetail(mission, unit),
   });
   legs.forEach((o, i) => legChecks(inputs, plan, o, i));
   ceilingCheck(inputs, plan, legs);
@@ -152,6 +179,39 @@ export function missionChecks(
   return inputs.map((c) => makeCheck(c, tight));
 }
 
+function reserveDetail(mission: MissionSummary, unit: string): string {
+  const f = mission.final;
+  const rule = f.rule === 'normalCruise' ? 'normal cruise' : 'best endurance';
+  const final =
+    f.time_s > 0
+      ? ` (final reserve ${fmt(f.time_s / 60)} min at ${rule}, ${fmt(f.altitude_m)} m)`
+      : '';
+  if (!mission.completed) {
+    return `The mission is not completed; ${fmt(mission.remaining)} ${unit} left where it stops, ${fmt(mission.requiredReserve)} ${unit} of reserve required.`;
+  }
+  if (mission.problems.length > 0) {
+    return `The reserve cannot be flown: ${mission.problems.map((p) => p.message).join('; ')}.`;
+  }
+  const minutes = (t: number) => (t > 0 ? ` (${fmt(t / 60)} min)` : '');
+  return `On landing ${fmt(mission.remaining)} ${unit}${minutes(mission.remainingTime_s)} left against ${fmt(mission.requiredReserve)} ${unit}${minutes(mission.requiredTime_s)} of reserve required${final}.`;
+}
+
+/** The leg flies a speed the planner chooses (best range, endurance, rate of climb, glide). */
+export function speedChosenByPlanner(leg: Leg): boolean {
+  switch (leg.kind) {
+    case 'climb':
+      return leg.speed.kind === 'bestRate';
+    case 'cruise':
+      return leg.speed.kind === 'bestRange';
+    case 'loiter':
+      return leg.speed.kind === 'bestEndurance';
+    case 'descent':
+      return leg.mode.by === 'glide';
+    default:
+      return false;
+  }
+}
+
 function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): void {
   const leg = plan.legs[i];
   if (!leg) return;
@@ -159,6 +219,8 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
   const c = o.checks;
   const sf = plan.settings.stallFactor;
   if (c.minStallRatio !== null) {
+    const chosen = speedChosenByPlanner(leg);
+    const atFloor = chosen && c.minStallRatio < sf * (1 + plan.settings.tightMargin);
     inputs.push({
       id: `stall:${i}`,
       label: `${name}: stall margin`,
@@ -169,7 +231,12 @@ function legChecks(inputs: CheckInput[], plan: Plan, o: LegOutcome, i: number): 
       bound: 'min',
       reference: 1,
       subject: name,
-      detail: `Lowest airspeed ${fmt(c.minStallRatio)} × stall speed against ${sf}.`,
+      ...(chosen ? { chosenSpeed: { atStallMargin: atFloor } } : {}),
+      detail: chosen
+        ? atFloor
+          ? `Speed chosen by the planner, limited by the stall margin: ${fmt(c.minStallRatio)} × stall speed (${sf} set).`
+          : `Speed chosen by the planner: lowest ${fmt(c.minStallRatio)} × stall speed (at least ${sf} by construction).`
+        : `Lowest airspeed ${fmt(c.minStallRatio)} × stall speed against ${sf}.`,
     });
   }
   if (c.power !== null) {

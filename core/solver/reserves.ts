@@ -3,30 +3,36 @@
  * planning): contingency = fraction × trip consumption, where the trip excludes the take-off
  * and landing allowance legs (the contingency covers what can vary in flight: wind, routing,
  * performance; an allowance is already a planned, fixed amount); alternate = the profile of
- * alternateReserve.ts (climb, cruise at best range at the alternate altitude, glide); hold =
- * consumption for the hold time at best endurance at the hold altitude; electric floor =
- * socFloor × usable energy. Alternate and hold are each flown from the landing mass with the
- * same integrator as the legs (each starting at the landing mass is slightly conservative for
- * the hold, which in practice follows the alternate).
+ * alternateReserve.ts (climb, cruise at best range at the alternate altitude, glide); final
+ * reserve = the hold time at normal cruise or best endurance, with the climb to it
+ * (finalReserve.ts); electric floor = socFloor × usable energy. Alternate and final reserve
+ * are each flown from the landing mass with the same integrator as the legs (each starting at
+ * the landing mass is slightly conservative for the hold, which in practice follows the
+ * alternate).
  *
  * When some leg takes its weather from the winds-aloft table, so do the reserves: both are
  * flown in the table's air (its temperature at their altitude), and the alternate with the
  * table's whole wind speed at each altitude as a headwind — the direction to the alternate is
  * not part of the plan, and a headwind is the conservative assumption. The hold needs no
  * wind: its consumption over a time does not depend on it.
+ *
+ * A reserve that cannot be computed or flown (reserveProblems.ts) is not a smaller reserve:
+ * `computed` is false, the problems say why, and the reserve check fails (checks.ts).
  */
-import type { ReservePolicy } from '../plan/schema.ts';
-import { alternateReserve, reservePath } from './alternateReserve.ts';
+import type { Plan } from '../plan/schema.ts';
+import { alternateReserve } from './alternateReserve.ts';
+import { finalReserve } from './finalReserve.ts';
 import type { FlightModel } from './model.ts';
-import { fmt } from './point.ts';
-import { flySegment, type MissionState } from './segment.ts';
-import type { ReserveBreakdown } from './types.ts';
+import { reserveAltitudeProblem } from './reserveProblems.ts';
+import type { MissionState } from './segment.ts';
+import type { FinalReserveSummary, ReserveBreakdown, ReserveProblem } from './types.ts';
 
 export interface ReserveOutcome {
   required: ReserveBreakdown;
-  /** False when a part could not be computed (its warning says why). */
+  /** False when a part could not be computed or flown (`problems` says why). */
   computed: boolean;
-  warnings: string[];
+  problems: ReserveProblem[];
+  final: FinalReserveSummary;
 }
 
 /**
@@ -35,39 +41,25 @@ export interface ReserveOutcome {
  */
 export function requiredReserves(
   model: FlightModel,
-  policy: ReservePolicy,
+  plan: Plan,
   landing: MissionState,
   tripConsumption: number,
 ): ReserveOutcome {
-  const alt = alternateReserve(model, policy, landing);
-  const warnings: string[] = [...alt.warnings];
-  let computed = alt.computed;
-  let hold = 0;
-  if (policy.holdTime_s > 0) {
-    const h_m = policy.holdAltitude_m;
-    const start: MissionState = { ...landing, t_s: 0, x_m: 0, air_m: 0, path_m: 0, h_m };
-    const seg = flySegment(
-      model,
-      {
-        path: reservePath(model, 'hold', { kind: 'bestEndurance' }, { kind: 'level' }, false),
-        indep: 't',
-        to: policy.holdTime_s,
-        limits: [],
-        samples: 0,
-      },
-      start,
-    );
-    if (seg.stoppedBy !== null) {
-      computed = false;
-      warnings.push(`Reserve hold: could not be computed (${seg.message}).`);
-    } else if (seg.stats.worstPowerMargin < 0) {
-      warnings.push(
-        `Reserve hold: needs ${fmt(seg.stats.worstPowerRequired_W)} W of thrust power at ${fmt(h_m)} m, more than the ${fmt(seg.stats.worstPowerAvailable_W)} W available.`,
-      );
+  const policy = plan.reserves;
+  const problems: ReserveProblem[] = [];
+  let alternate = 0;
+  if (policy.alternateDistance_m > 0) {
+    const refused = reserveAltitudeProblem(model, plan, 'alternate', policy.alternateAltitude_m);
+    if (refused !== null) problems.push(refused);
+    else {
+      const alt = alternateReserve(model, policy, landing);
+      if (alt.problem !== null) problems.push(alt.problem);
+      alternate = alt.amount;
     }
-    hold = start.left - seg.end.left;
   }
-  const alternate = alt.amount;
+  const fin = finalReserve(model, plan, landing);
+  if (fin.problem !== null) problems.push(fin.problem);
+  const hold = fin.amount;
   const contingency = policy.contingencyFraction * Math.max(tripConsumption, 0);
   const floor = model.consumable === 'battery' ? policy.socFloor * model.usableEnergy_J : 0;
   return {
@@ -78,7 +70,8 @@ export function requiredReserves(
       floor,
       total: contingency + alternate + hold + floor,
     },
-    computed,
-    warnings,
+    computed: problems.length === 0,
+    problems,
+    final: fin.summary,
   };
 }

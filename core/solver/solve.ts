@@ -22,8 +22,8 @@ import { searchLoiterConsumption } from './loiterReserve.ts';
 import { withMissionWind } from './missionWind.ts';
 import { reynoldsWarnings } from './reynolds.ts';
 import { buildModel, RELATIVE_TOLERANCE, type FlightModel, type SolveTolerance } from './model.ts';
-import { fmt } from './point.ts';
 import { requiredReserves } from './reserves.ts';
+import { shapeChecks } from './shapeChecks.ts';
 import {
   alongAfter,
   annotateLeg,
@@ -182,7 +182,7 @@ function searchUntilReserve(
     const rest = flyLegs(m, index + 1, loiter.end, 0, along, allowances);
     if (rest.failedAt !== null) return null;
     const trip = contingencyBase(model, rest);
-    return rest.end.left - requiredReserves(model, plan.reserves, rest.end, trip).required.total;
+    return rest.end.left - requiredReserves(model, plan, rest.end, trip).required.total;
   };
   const scale = Math.max(model.consumableStart, 1e-300);
   return searchLoiterConsumption(
@@ -218,23 +218,29 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
     );
   }
   const trip = model.consumableStart - end.left;
-  const reserve = requiredReserves(model, plan.reserves, end, contingencyBase(model, flown));
+  const reserve = requiredReserves(model, plan, end, contingencyBase(model, flown));
   const total = reserve.required.total;
-  const warnings = [...(route?.warnings ?? []), ...flown.warnings, ...reserve.warnings];
-  if (completed && Math.abs(end.h_m - env.arrivalElevation_m) > 1) {
-    warnings.push(
-      `The mission ends at ${fmt(end.h_m)} m, not at the arrival elevation ${fmt(env.arrivalElevation_m)} m.`,
-    );
-  }
+  const warnings = [...(route?.warnings ?? []), ...flown.warnings];
   const field = fieldChecks(model, plan, end.mass_kg);
   warnings.push(...field.warnings);
   warnings.push(...reynoldsWarnings(model, plan, legs));
+  const rate = reserve.computed ? reserve.final.rate : 0;
+  const requiredTime_s = rate > 0 ? total / rate : 0;
+  const remainingTime_s = rate > 0 ? Math.max(end.left, 0) / rate : 0;
   const checks = missionChecks(
     model,
     plan,
     flown.outcomes,
-    { completed, remaining: end.left, requiredReserve: total },
-    field.inputs,
+    {
+      completed,
+      remaining: end.left,
+      requiredReserve: total,
+      problems: reserve.problems,
+      final: reserve.final,
+      requiredTime_s,
+      remainingTime_s,
+    },
+    [...shapeChecks(plan, flown.outcomes, completed, end.h_m), ...field.inputs],
   );
   const fuel = model.consumable === 'fuel';
   const startAmount = model.consumableStart;
@@ -266,6 +272,10 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
       required: reserve.required,
       kept: completed && reserve.computed && end.left >= total,
       margin: (end.left - total) / reserveRef,
+      final: reserve.final,
+      problems: reserve.problems,
+      requiredTime_s,
+      remainingTime_s,
     },
     checks,
     verdict: verdictOf(checks, !completed),

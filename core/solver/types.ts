@@ -97,8 +97,8 @@ export interface Check {
   /**
    * Stable id: `mtow`, `tank`, `reserve`, `socFloor`, `ceiling` (plan-level: the highest
    * altitude of the mission), per leg `stall:3`, `power:3`, `climb:3`,
-   * `station:3` (a loiter in wind), and with an airfield
-   * `takeoffRun`, `launch`, `landingRun`.
+   * `station:3` (a loiter in wind), with an airfield `takeoffRun`, `launch`, `landingRun`,
+   * and the mission shape `shape:order`, `shape:arrival`, `shape:flight` (shapeChecks.ts).
    */
   id: string;
   label: string;
@@ -116,7 +116,10 @@ export interface Check {
     | 'verticalSpeed'
     | 'airspeed'
     | 'volume'
-    | 'distance';
+    | 'distance'
+    | 'time'
+    /** A number of things (legs out of order): a plain count. */
+    | 'count';
   /** Relative margin: (limit − value)/limit for upper limits, (value − limit)/limit for lower ones. */
   margin: number;
   state: CheckState;
@@ -130,6 +133,34 @@ export interface Check {
   reason?: string;
   /** The reserve check of a mission that was not completed: it fails whatever the numbers say. */
   incomplete?: boolean;
+  /** The reserve check when the reserve cannot be computed or flown: why (the check fails). */
+  reserveProblems?: ReserveProblem[];
+  /** The reserve check: the final reserve's time and rule, and the times on landing (s). */
+  reserveTime?: {
+    final_s: number;
+    rule: FinalReserveSummary['rule'];
+    required_s: number;
+    remaining_s: number;
+  };
+  /**
+   * A stall check on a leg whose speed the planner chose (best range, endurance, rate of
+   * climb, glide): the speed keeps the stall margin by construction, so the check is
+   * information ("limited by the stall margin" when it sits there), never tight or failing.
+   */
+  chosenSpeed?: { atStallMargin: boolean };
+  /** Mission-shape checks: the legs named (0-based). */
+  legIndices?: number[];
+  /** `shape:order`: each leg that cannot be flown where it stands, and why. */
+  orderProblems?: {
+    legIndex: number;
+    /** The leg's name, and the landing it follows ('' for a descent below the field). */
+    leg: string;
+    other: string;
+    why: 'takeoffAfterLanding' | 'flightAfterLanding' | 'belowField';
+    /** belowField: the descent's target altitude and the lower field's elevation (m). */
+    altitude_m: number;
+    field_m: number;
+  }[];
   /**
    * Jet power checks: the same point as thrust (N), required and available (value and limit
    * stay thrust power, W); a jet's thrust is what its pilot and engineer read.
@@ -146,6 +177,43 @@ export interface ReserveBreakdown {
   /** Battery floor (electric only). */
   floor: number;
   total: number;
+}
+
+/** How the final reserve (the timed hold) was flown. */
+export interface FinalReserveSummary {
+  /** 'normalCruise': the plan's cruise speed schedule; 'bestEndurance': least consumption per time. */
+  rule: 'normalCruise' | 'bestEndurance';
+  /** 'holdAltitude': the policy's hold altitude; 'lastCruise': where the last cruise leg starts. */
+  level: 'holdAltitude' | 'lastCruise';
+  altitude_m: number;
+  time_s: number;
+  /** The cruise leg whose speed schedule was flown (−1: best endurance, or no cruise leg: best range). */
+  cruiseLegIndex: number;
+  /** Consumption of the climb from the arrival field and of the timed part (kg or J). */
+  climb: number;
+  timed: number;
+  /** Mean consumption of the timed part per second: kg/s of fuel or W of battery energy. */
+  rate: number;
+  /** Mean true airspeed of the timed part. */
+  tas_m_s: number;
+}
+
+/** Why a reserve could not be computed or flown: the reserve check fails with it. */
+export interface ReserveProblem {
+  part: 'hold' | 'alternate';
+  why: 'belowField' | 'aboveCeiling' | 'powerShort' | 'cannotClimb' | 'notFlown';
+  /** The altitude concerned (MSL). */
+  altitude_m: number;
+  /**
+   * The limit broken: the lowest allowed altitude (belowField), the ceiling (aboveCeiling,
+   * pressure altitude), the rate-of-climb floor (cannotClimb), the power available (W).
+   */
+  limit: number;
+  /** powerShort: thrust power required and available, W (0 otherwise). */
+  required_W: number;
+  available_W: number;
+  /** The same in words, SI. */
+  message: string;
 }
 
 export interface PlanResult {
@@ -165,7 +233,22 @@ export interface PlanResult {
   };
   /** What is left on landing (fuel kg or usable energy J) and as a fraction of the start amount. */
   landing: { remaining: number; fractionOfStart: number; soc: number };
-  reserve: { required: ReserveBreakdown; kept: boolean; margin: number };
+  reserve: {
+    required: ReserveBreakdown;
+    /** Landed with at least the required reserve, and the reserve could be computed and flown. */
+    kept: boolean;
+    margin: number;
+    /** How the final reserve was flown (finalReserve.ts). */
+    final: FinalReserveSummary;
+    /** Why the reserve could not be computed or flown (empty when it was). */
+    problems: ReserveProblem[];
+    /**
+     * The required reserve and what is left on landing as time at the final reserve's mean
+     * consumption rate (0 when no final reserve is set or it could not be flown).
+     */
+    requiredTime_s: number;
+    remainingTime_s: number;
+  };
   checks: Check[];
   /** Worst state among the checks; 'fails' when any leg failed. */
   verdict: CheckState;

@@ -190,6 +190,8 @@ export function mission(kind: 'prop' | 'jet' | 'electric', distance_m: number): 
     alternateDistance_m: 0,
     alternateAltitude_m: 500,
     socFloor: kind === 'electric' ? 0.1 : 0,
+    // A small UAV holds 100 m above the field (the 300 m default suits manned aircraft).
+    ...(kind === 'electric' ? { minHeightAboveField_m: 100 } : {}),
   };
   return plan(
     `${kind} mission`,

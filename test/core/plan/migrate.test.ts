@@ -40,7 +40,7 @@ describe('plan migrations', () => {
   });
 
   it('an injected v0 → v1 step makes an older file load exactly like its v1 twin', () => {
-    const v1 = demoJson('twelve-legs.json');
+    const v1 = JSON.parse(readFileSync(join(V1_DIR, 'twelve-legs.json'), 'utf8')) as RawPlan;
     const v0 = asFakeV0(v1);
     const viaStep = parsePlan(v0, { migrations: { ...MIGRATIONS, 0: fakeStep0 } });
     const direct = parsePlan(v1);

@@ -133,11 +133,15 @@ describe('alternate reserve: climb, cruise at best range, glide', () => {
         reserves: { alternateDistance_m: 100_000, alternateAltitude_m: 12_000 },
       }),
     );
-    expect(
-      r.warnings.some((w) =>
-        /^Reserve alternate: could not be computed \(cannot climb above \d+ m/.test(w),
-      ),
-    ).toBe(true);
+    // The aircraft cannot climb there: the reserve cannot be flown, and the check says why
+    // (reserveProblems.ts) instead of passing a reserve that was never computed.
+    const p = r.reserve.problems[0];
+    expect(p?.part).toBe('alternate');
+    expect(['cannotClimb', 'aboveCeiling']).toContain(p?.why);
+    const check = r.checks.find((c) => c.id === 'reserve');
+    expect(check?.state).toBe('fails');
+    expect(check?.detail).toMatch(/^The reserve cannot be flown: the alternate /);
     expect(r.reserve.kept).toBe(false);
+    expect(r.verdict).toBe('fails');
   });
 });

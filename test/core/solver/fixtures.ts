@@ -237,6 +237,9 @@ export function makePlan(kind: Kind, legs: Leg[], o: PlanOptions = {}): Plan {
       alternateDistance_m: 0,
       alternateAltitude_m: 0,
       socFloor: 0,
+      // These plans fly at the field's elevation and compare reserves with closed forms at
+      // one altitude: no minimum height above the field (the rule: test/core/solver/verdicts.test.ts).
+      minHeightAboveField_m: 0,
       ...o.reserves,
     },
     settings: { stallFactor: 1.2, tightMargin: 0.1, minClimbRate_m_s: 0.5, ...o.settings },

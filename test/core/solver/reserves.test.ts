@@ -44,10 +44,14 @@ describe('reserves', () => {
     const h = 1000;
     const r = solvePlan(
       makePlan('propeller', [cruise({ end: { by: 'distance', distance_m: 200_000 } })], {
-        reserves: { holdTime_s: hold, holdAltitude_m: h },
+        reserves: { holdTime_s: hold, holdAltitude_m: h, finalReserveSpeed: 'bestEndurance' },
       }),
     );
-    const W0 = r.legs[0]!.end.mass_kg * G0;
+    // The timed part starts at the top of the climb from the field (counted separately).
+    const f = r.reserve.final;
+    expect(f.climb).toBeGreaterThan(0);
+    expect(rel(r.reserve.required.hold, f.climb + f.timed)).toBeLessThan(1e-14); // definition
+    const W0 = (r.legs[0]!.end.mass_kg - f.climb) * G0;
     const rho = atmosphereAt(h).rho_kg_m3;
     const CL = Math.sqrt((3 * ANDERSON_PROP.CD0) / kProp);
     const CD = 4 * ANDERSON_PROP.CD0;
@@ -56,7 +60,7 @@ describe('reserves', () => {
       W0 ** -0.5 +
       (hold * cp) / (ANDERSON_PROP.eta * (CL ** 1.5 / CD) * Math.sqrt(2 * rho * ANDERSON_PROP.S));
     const fuel = (W0 - invSqrtW1 ** -2) / G0;
-    expect(rel(r.reserve.required.hold, fuel)).toBeLessThan(1e-6);
+    expect(rel(f.timed, fuel)).toBeLessThan(1e-6);
   });
 
   it('an alternate at the landing altitude is a cruise at best range: the propeller range closed form', () => {
@@ -81,7 +85,12 @@ describe('reserves', () => {
     // CLmax 2.5 keeps the minimum-power CL (1.47) inside the 1.2 stall margin.
     const r = solvePlan(
       makePlan('electric', [cruise({ end: { by: 'distance', distance_m: 5000 } })], {
-        reserves: { holdTime_s: hold, holdAltitude_m: 0, socFloor: 0.2 },
+        reserves: {
+          holdTime_s: hold,
+          holdAltitude_m: 0,
+          socFloor: 0.2,
+          finalReserveSpeed: 'bestEndurance',
+        },
         aircraft: (a) => ({ ...a, polar: { ...a.polar, CLmax: 2.5 } }),
       }),
     );
@@ -112,7 +121,14 @@ describe('reserves', () => {
         }),
         landing({ by: 'fuel', fuel_kg: 1 }),
       ],
-      { reserves: { contingencyFraction: 0.05, holdTime_s: 1800, holdAltitude_m: 500 } },
+      {
+        reserves: {
+          contingencyFraction: 0.05,
+          holdTime_s: 1800,
+          holdAltitude_m: 500,
+          finalReserveSpeed: 'bestEndurance',
+        },
+      },
     );
     const r = solvePlan(plan);
     expect(r.completed).toBe(true);
