@@ -19,6 +19,8 @@ export const INVOKE_METHODS = [
   'exportPdf',
   'exportCsv',
   'exportGpx',
+  'printReport',
+  'openOffered',
 ] as const;
 
 export type InvokeMethod = (typeof INVOKE_METHODS)[number];
@@ -39,6 +41,12 @@ export const SIMPLE_MENU_COMMANDS = [
   'exportPdf',
   'exportCsv',
   'exportGpx',
+  'print',
+  'undo',
+  'redo',
+  'help',
+  // The OS asked to open a file (double-click, command line): the page calls openOffered.
+  'openOffered',
 ] as const;
 
 export type SimpleMenuCommand = (typeof SIMPLE_MENU_COMMANDS)[number];

@@ -103,6 +103,13 @@ export const contract = {
   exportCsv: channel<Outcome<SavedFile>>()(textExport),
   /** Save the route as GPX text the page produced. */
   exportGpx: channel<Outcome<SavedFile>>()(textExport),
+  /** Print the current page (its print styles) with the system's print dialog. */
+  printReport: channel<Outcome>()(z.tuple([])),
+  /**
+   * Open the file the operating system handed the shell (double-click, command line,
+   * second instance). No path argument: the page can only take what the OS offered.
+   */
+  openOffered: channel<Outcome<OpenedPlan>>()(z.tuple([])),
 } satisfies { [K in InvokeMethod]: Channel<z.ZodType<readonly unknown[]>, unknown> };
 
 export type Contract = typeof contract;

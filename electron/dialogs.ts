@@ -8,7 +8,7 @@ import { app, dialog, type BrowserWindow, type FileFilter } from 'electron';
 import type { ChangedOnDiskChoice, CloseChoice, SaveKind, ShellPorts } from './document.ts';
 
 const FILTERS: Record<SaveKind, FileFilter[]> = {
-  plan: [{ name: 'Legwise plan', extensions: ['json'] }],
+  plan: [{ name: 'Legwise plan', extensions: ['legwise'] }],
   pdf: [{ name: 'PDF document', extensions: ['pdf'] }],
   csv: [{ name: 'CSV table', extensions: ['csv'] }],
   gpx: [{ name: 'GPX route', extensions: ['gpx'] }],
@@ -33,7 +33,8 @@ export function dialogPorts(getWindow: () => BrowserWindow | null): DialogPorts 
     async chooseOpenPath() {
       const options = {
         title: 'Open plan',
-        filters: FILTERS.plan,
+        // Plans of earlier versions were `.legwise.json`: those open too.
+        filters: [{ name: 'Legwise plan', extensions: ['legwise', 'json'] }],
         properties: ['openFile' as const],
       };
       const win = parent();

@@ -37,6 +37,7 @@ import {
   type WriteOps,
 } from './files.ts';
 import { removeStaleTemps } from './atomicWrite.ts';
+import { PLAN_FILE_EXTENSION, isPlanFileName } from './openRequests.ts';
 
 export type SaveKind = 'plan' | 'pdf' | 'csv' | 'gpx';
 export type CloseChoice = 'save' | 'discard' | 'cancel';
@@ -55,6 +56,10 @@ export interface ShellPorts {
   /** "Another program changed <file> since you opened it": overwrite, save as, reload? */
   askChangedOnDisk(fileName: string): Promise<ChangedOnDiskChoice>;
   printPdf(): Promise<Uint8Array>;
+  /** The system print dialog for the page (its print styles). */
+  print(): Promise<void>;
+  /** The OS's own recent-documents list (Windows jump list, macOS Open Recent, GNOME). */
+  addRecentDocument?(filePath: string): void;
   showTitle(name: string, dirty: boolean, filePath: string | null): void;
   recentChanged(files: RecentFile[]): void;
   sendMenuCommand(command: MenuCommand): void;
@@ -63,7 +68,7 @@ export interface ShellPorts {
   writeOps?: Partial<WriteOps>;
 }
 
-export const PLAN_EXTENSION = '.legwise.json';
+export const PLAN_EXTENSION = PLAN_FILE_EXTENSION;
 export const UNTITLED = 'Untitled plan';
 
 export function recentStorePath(userDataDir: string): string {
@@ -81,6 +86,8 @@ export interface DocumentState {
   name: string;
   dirty: boolean;
   closeAfterSave: boolean;
+  /** A file the OS asked us to open, waiting for the page to call openOffered. */
+  offered: string | null;
   /** What `filePath` held when it was opened or last saved; checked before each save. */
   stamp: FileStamp | null;
 }
@@ -92,6 +99,7 @@ export function createDocument(ports: ShellPorts) {
     name: UNTITLED,
     dirty: false,
     closeAfterSave: false,
+    offered: null,
     stamp: null,
   };
   const recentStore = recentStorePath(ports.userDataDir);
@@ -115,6 +123,7 @@ export function createDocument(ports: ShellPorts) {
     });
     showTitle();
     publishRecent(await addRecent(recentStore, filePath));
+    ports.addRecentDocument?.(filePath);
     return { ok: true, plan: loaded.plan, warnings: loaded.warnings, filePath };
   }
 
@@ -170,6 +179,7 @@ export function createDocument(ports: ShellPorts) {
     Object.assign(state, { filePath, suggestedPath: null, name: plan.name, dirty: false, stamp });
     showTitle();
     publishRecent(await addRecent(recentStore, filePath));
+    ports.addRecentDocument?.(filePath);
     if (state.closeAfterSave) ports.closeWindow();
     return { ok: true, filePath };
   }
@@ -275,6 +285,21 @@ export function createDocument(ports: ShellPorts) {
       await clearAutosave(ports.userDataDir);
       return { ok: true };
     },
+    async printReport() {
+      try {
+        await ports.print();
+      } catch (error) {
+        return failure('INTERNAL', `Printing failed: ${describeFsError(error)}.`);
+      }
+      return { ok: true };
+    },
+    async openOffered() {
+      const filePath = state.offered;
+      if (filePath === null) return failure('NOT_FOUND', 'No file is waiting to be opened.');
+      if (!(await mayDiscard())) return failure('CANCELLED', 'Kept the current plan.');
+      state.offered = null;
+      return openPath(filePath);
+    },
     exportPdf: ({ suggestedName }) => exportBytes('pdf', suggestedName, () => ports.printPdf()),
     exportCsv: ({ text, suggestedName }) => exportBytes('csv', suggestedName, async () => text),
     exportGpx: ({ text, suggestedName }) => exportBytes('gpx', suggestedName, async () => text),
@@ -301,6 +326,18 @@ export function createDocument(ports: ShellPorts) {
   }
 
   /**
+   * The OS asks to open `filePath` (double-click, `open-file`, command line, a second
+   * instance). The page holds the plan, so it is asked to take the file (it may first
+   * confirm discarding unsaved changes). Returns false for a name that is not a plan.
+   */
+  function offerFile(filePath: string): boolean {
+    if (!isPlanFileName(filePath)) return false;
+    state.offered = path.resolve(filePath);
+    ports.sendMenuCommand({ kind: 'openOffered' });
+    return true;
+  }
+
+  /**
    * On start: temporary files a crashed writer of ours left in the app-data folders and
    * beside the recent plans (each carries its writer's pid; only dead writers' go).
    */
@@ -315,6 +352,7 @@ export function createDocument(ports: ShellPorts) {
 
   return {
     handlers,
+    offerFile,
     removeOrphanTemps,
     state: state as Readonly<DocumentState>,
     onCloseRequested,

@@ -13,7 +13,7 @@ import { contract, failure, type Failure, type Handlers } from './contract.ts';
 
 /** Where our page is allowed to come from. */
 export interface TrustedPage {
-  /** file:// URL of the built renderer's index.html. */
+  /** URL of the built renderer's index.html (legwise://app/index.html). */
   indexUrl: string;
   /** Vite dev server URL, only while developing. */
   devServerUrl?: string;
@@ -32,10 +32,9 @@ export function isTrustedSender(sender: SenderInfo, trust: TrustedPage): boolean
   } catch {
     return false;
   }
-  if (url.protocol === 'file:') {
-    const index = new URL(trust.indexUrl);
-    return index.protocol === 'file:' && url.host === index.host && url.pathname === index.pathname;
-  }
+  const index = new URL(trust.indexUrl);
+  if (url.protocol === index.protocol && index.protocol !== 'http:' && index.protocol !== 'https:')
+    return url.host === index.host && url.pathname === index.pathname;
   if (trust.devServerUrl === undefined) return false;
   return (
     (url.protocol === 'http:' || url.protocol === 'https:') &&

@@ -7,6 +7,7 @@
 import type { MenuItemConstructorOptions } from 'electron';
 import type { MenuCommand, SimpleMenuCommand } from './channels.ts';
 import type { RecentFile } from './contract.ts';
+import { acceleratorOf } from './shortcutList.ts';
 
 export interface MenuHandlers {
   /** Forward a command to the page (it holds the plan). */
@@ -22,13 +23,18 @@ export interface MenuOptions {
   devTools: boolean;
 }
 
+/** The menu's shortcuts, from the one list Help shows (shortcutList.ts). */
 export const ACCELERATORS = {
-  new: 'CmdOrCtrl+N',
-  open: 'CmdOrCtrl+O',
-  save: 'CmdOrCtrl+S',
-  saveAs: 'CmdOrCtrl+Shift+S',
-  exportPdf: 'CmdOrCtrl+P',
-  exportCsv: 'CmdOrCtrl+Shift+E',
+  new: acceleratorOf('new'),
+  open: acceleratorOf('open'),
+  save: acceleratorOf('save'),
+  saveAs: acceleratorOf('saveAs'),
+  print: acceleratorOf('print'),
+  exportPdf: acceleratorOf('exportPdf'),
+  exportCsv: acceleratorOf('exportCsv'),
+  undo: acceleratorOf('undo'),
+  redo: acceleratorOf('redo'),
+  help: acceleratorOf('help'),
 } as const;
 
 /** Quit shortcut per platform (Windows names it Exit and closes with Alt+F4). */
@@ -64,6 +70,7 @@ function fileMenu(
     { label: 'Save', accelerator: ACCELERATORS.save, click: send('save') },
     { label: 'Save As…', accelerator: ACCELERATORS.saveAs, click: send('saveAs') },
     { type: 'separator' },
+    { label: 'Print…', accelerator: ACCELERATORS.print, click: send('print') },
     {
       label: 'Export Report as PDF…',
       accelerator: ACCELERATORS.exportPdf,
@@ -90,6 +97,52 @@ function fileMenu(
   return { label: 'File', submenu: items };
 }
 
+/**
+ * Undo and Redo act on the plan's history (the page holds it), not on the text of one
+ * box. Off macOS the page itself answers the keys (useShortcuts), so the menu shows them
+ * without registering them — one key press, one undo.
+ */
+function editMenu(platform: NodeJS.Platform, handlers: MenuHandlers): MenuItemConstructorOptions {
+  const registerAccelerator = platform === 'darwin';
+  return {
+    label: 'Edit',
+    submenu: [
+      {
+        label: 'Undo',
+        accelerator: ACCELERATORS.undo,
+        registerAccelerator,
+        click: () => handlers.command({ kind: 'undo' }),
+      },
+      {
+        label: 'Redo',
+        accelerator: ACCELERATORS.redo,
+        registerAccelerator,
+        click: () => handlers.command({ kind: 'redo' }),
+      },
+      { type: 'separator' },
+      { role: 'cut' },
+      { role: 'copy' },
+      { role: 'paste' },
+      { role: 'selectAll' },
+    ],
+  };
+}
+
+function helpMenu(
+  handlers: MenuHandlers,
+  about: MenuItemConstructorOptions | null,
+): MenuItemConstructorOptions {
+  const items: MenuItemConstructorOptions[] = [
+    {
+      label: 'Keyboard Shortcuts and Guide',
+      accelerator: ACCELERATORS.help,
+      click: () => handlers.command({ kind: 'help' }),
+    },
+  ];
+  if (about) items.push({ type: 'separator' }, about);
+  return { role: 'help', label: 'Help', submenu: items };
+}
+
 function viewMenu(options: MenuOptions): MenuItemConstructorOptions {
   const items: MenuItemConstructorOptions[] = [
     { role: 'resetZoom' },
@@ -112,7 +165,7 @@ export function buildMenuTemplate(
     label: `About ${options.appName}`,
     click: handlers.about,
   };
-  const edit: MenuItemConstructorOptions = { role: 'editMenu' };
+  const edit = editMenu(platform, handlers);
   if (platform === 'darwin') {
     return [
       {
@@ -137,12 +190,13 @@ export function buildMenuTemplate(
       edit,
       viewMenu(options),
       { role: 'windowMenu' },
+      helpMenu(handlers, null),
     ];
   }
   return [
     fileMenu(platform, handlers, options),
     edit,
     viewMenu(options),
-    { label: 'Help', submenu: [about] },
+    helpMenu(handlers, about),
   ];
 }

@@ -32,6 +32,8 @@ const api: LegwiseApi = {
   exportPdf: (options) => invoke('exportPdf', options),
   exportCsv: (options) => invoke('exportCsv', options),
   exportGpx: (options) => invoke('exportGpx', options),
+  printReport: () => invoke('printReport'),
+  openOffered: () => invoke('openOffered'),
   onMenuCommand(callback: (command: MenuCommand) => void) {
     // The page gets the command only, never the IPC event (it would expose the sender).
     const listener = (_event: IpcRendererEvent, command: unknown) => {

@@ -7,9 +7,13 @@
  */
 import type { Session, WebContents } from 'electron';
 
+/** The page's own scheme and host (appProtocol.ts serves it; kept here to avoid a cycle). */
+const OWN_SCHEME = 'legwise:';
+const OWN_HOST = 'app';
+
 /**
  * The canonical content security policy. The renderer's index.html carries the same
- * string in a <meta> tag (file:// responses have no headers); a test compares them.
+ * string in a <meta> tag (and the shell's protocol sends it as a header); a test compares them.
  */
 export const CONTENT_SECURITY_POLICY = [
   "default-src 'self'",
@@ -23,7 +27,10 @@ export const CONTENT_SECURITY_POLICY = [
   "frame-ancestors 'none'",
 ].join('; ');
 
-/** Only our own files, inline data and devtools may load; http(s)/ws only from the dev server. */
+/**
+ * Only our own page (legwise://app/), inline data and devtools may load — not file://,
+ * so nothing on the disk is reachable from the page; http(s)/ws only from the dev server.
+ */
 export function isAllowedRequestUrl(url: string, devOrigin?: string): boolean {
   let parsed: URL;
   try {
@@ -31,8 +38,8 @@ export function isAllowedRequestUrl(url: string, devOrigin?: string): boolean {
   } catch {
     return false;
   }
-  if (['file:', 'data:', 'blob:', 'devtools:', 'chrome-extension:'].includes(parsed.protocol))
-    return true;
+  if (parsed.protocol === OWN_SCHEME) return parsed.host === OWN_HOST;
+  if (['data:', 'blob:', 'devtools:', 'chrome-extension:'].includes(parsed.protocol)) return true;
   if (devOrigin === undefined) return false;
   const dev = new URL(devOrigin);
   const sameHost = parsed.host === dev.host;

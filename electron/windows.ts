@@ -2,7 +2,8 @@
  * The main window. `mainWindowOptions` is pure so a test can assert every security
  * setting (Electron security checklist: context isolation, sandbox, no Node in the
  * page, web security on, no insecure content, no <webview>). The page is always our
- * built renderer from dist/ over file:// — or the local dev server while developing.
+ * built renderer from dist/ through the shell's own protocol (legwise://app/, see
+ * appProtocol.ts) — or the local dev server while developing. Never file://.
  */
 import { BrowserWindow, type BrowserWindowConstructorOptions } from 'electron';
 
@@ -42,16 +43,28 @@ export function windowTitle(planName: string, dirty: boolean): string {
 }
 
 export interface PageSource {
-  /** Absolute path of dist/index.html. */
-  indexFile: string;
+  /** The built page's URL on the shell's protocol (APP_INDEX_URL). */
+  indexUrl: string;
   /** Vite dev server URL, only while developing. */
   devServerUrl?: string;
 }
 
-export function createMainWindow(preloadPath: string, page: PageSource): BrowserWindow {
-  const win = new BrowserWindow(mainWindowOptions(preloadPath));
-  win.once('ready-to-show', () => win.show());
-  if (page.devServerUrl !== undefined) void win.loadURL(page.devServerUrl);
-  else void win.loadFile(page.indexFile);
+/** Where the window was last time (windowState.ts); null for the default size. */
+export interface RestoredBounds {
+  bounds: { x?: number; y?: number; width: number; height: number };
+  maximized: boolean;
+}
+
+export function createMainWindow(
+  preloadPath: string,
+  page: PageSource,
+  restored: RestoredBounds | null = null,
+): BrowserWindow {
+  const win = new BrowserWindow({ ...mainWindowOptions(preloadPath), ...restored?.bounds });
+  win.once('ready-to-show', () => {
+    if (restored?.maximized) win.maximize();
+    win.show();
+  });
+  void win.loadURL(page.devServerUrl ?? page.indexUrl);
   return win;
 }

@@ -3,11 +3,13 @@
 /**
  * The plan's notes in headless Chromium, as a person uses them: a new plan has none, typed
  * notes stay with the plan, a demo shows its own note (the text in examples/), New empties
- * them again. Expected texts come from the example files themselves.
+ * them again. Expected texts come from the example files themselves. Also F1: the
+ * shortcuts (the same list the desktop menu uses) and the short guide.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { examplePlan } from '../renderer/fixtures.ts';
+import { SHORTCUTS, keyLabel } from '../../electron/shortcutList.ts';
 import { haveChromium, openPlanner, type PlannerPage } from './harness.ts';
 
 const byTestId = (id: string) => `[data-testid="${id}"]`;
@@ -61,6 +63,27 @@ describe.runIf(haveChromium || !!process.env.CI)('plan notes in the planner', ()
     await page.click(byTestId('file-new'));
     await page.click(byTestId('mission-tab-notes'));
     await expect.poll(() => page.locator(byTestId('field-notes')).inputValue()).toBe('');
+    expect(pageErrors).toEqual([]);
+  });
+
+  it('F1 shows every shortcut and the guide; Escape closes it', async () => {
+    await page.click(byTestId('planner-workspace'), { position: { x: 5, y: 5 } });
+    await page.keyboard.press('F1');
+    const panel = page.locator(byTestId('help-panel'));
+    await expect.poll(() => panel.isVisible()).toBe(true);
+    const rows = await page.locator(byTestId('help-shortcut')).allInnerTexts();
+    expect(rows).toHaveLength(SHORTCUTS.length);
+    const save = SHORTCUTS.find((s) => s.id === 'save');
+    expect(rows.some((r) => r.includes(keyLabel(save?.accelerator ?? '?', false)))).toBe(true);
+    expect(await page.locator(byTestId('help-guide')).innerText()).toContain('legs');
+    expect(await panel.innerText()).toContain('Caution.');
+    await page.keyboard.press('Escape');
+    await expect.poll(() => panel.isVisible()).toBe(false);
+    // And the Help button opens it again, as a person without F1 would.
+    await page.click(byTestId('help-open'));
+    await expect.poll(() => panel.isVisible()).toBe(true);
+    await page.click(byTestId('help-close'));
+    await expect.poll(() => panel.isVisible()).toBe(false);
     expect(pageErrors).toEqual([]);
   });
 });

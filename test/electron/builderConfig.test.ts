@@ -39,6 +39,22 @@ describe('build/electron-builder.json', () => {
     expect(JSON.stringify(config)).not.toMatch(/electron-updater|https?:\/\//);
   });
 
+  it('associates our own extensions and turns the file-protocol fuse off', () => {
+    // Extensions and names of our own (issue: file associations); mimeType for Linux desktops.
+    expect(config.fileAssociations).toEqual([
+      expect.objectContaining({ ext: 'legwise', name: 'Legwise plan', role: 'Editor' }),
+      expect.objectContaining({ ext: 'lwac', name: 'Legwise aircraft', role: 'Editor' }),
+    ]);
+    for (const a of config.fileAssociations) expect(a.mimeType).toMatch(/^application\/x-legwise-/);
+    // Electron fuses (electron/fuses docs): the page is served by protocol.handle, so
+    // file:// needs no extra privileges; nothing may run the app as plain Node.
+    expect(config.electronFuses).toMatchObject({
+      grantFileProtocolExtraPrivileges: false,
+      runAsNode: false,
+      onlyLoadAppFromAsar: true,
+    });
+  });
+
   it('builds AppImage + deb, NSIS and DMG, with Linux metadata', () => {
     expect(config.linux.target).toEqual(['AppImage', 'deb']);
     expect(config.linux.maintainer).toMatch(/<.+@.+>/);

@@ -29,6 +29,8 @@ function ports(overrides: Partial<ShellPorts> = {}) {
     askSaveBeforeClose: vi.fn(async () => 'cancel' as const),
     askChangedOnDisk: vi.fn(async (): Promise<ChangedOnDiskChoice> => 'cancel'),
     printPdf: vi.fn(async () => new Uint8Array([0x25, 0x50, 0x44, 0x46])),
+    print: vi.fn(async () => undefined),
+    addRecentDocument: vi.fn(),
     showTitle: vi.fn(),
     recentChanged: vi.fn(),
     sendMenuCommand: vi.fn(),
@@ -49,7 +51,7 @@ describe('saving', () => {
       ok: true,
       filePath: target,
     });
-    expect(p.chooseSavePath).toHaveBeenCalledWith('plan', 'Survey.legwise.json');
+    expect(p.chooseSavePath).toHaveBeenCalledWith('plan', 'Survey.legwise');
     expect(await doc.handlers.savePlan(planNamed('Survey 2'))).toEqual({
       ok: true,
       filePath: target,

@@ -8,6 +8,9 @@ import { vi } from 'vitest';
 
 export class FakeWebContents extends EventEmitter {
   send = vi.fn();
+  print = vi.fn((_options: unknown, callback?: (success: boolean, reason: string) => void) =>
+    callback?.(true, ''),
+  );
   printToPDF = vi.fn(async () => new Uint8Array([0x25, 0x50, 0x44, 0x46])); // "%PDF"
   windowOpenHandler: ((details: unknown) => unknown) | undefined;
   setWindowOpenHandler(handler: (details: unknown) => unknown): void {
@@ -26,6 +29,9 @@ export class BrowserWindow extends EventEmitter {
   focus = vi.fn();
   restore = vi.fn();
   isMinimized = vi.fn(() => false);
+  isMaximized = vi.fn(() => false);
+  maximize = vi.fn();
+  getNormalBounds = vi.fn(() => ({ x: 120, y: 80, width: 1100, height: 760 }));
   setDocumentEdited = vi.fn();
   setRepresentedFilename = vi.fn();
   constructor(readonly options: Record<string, unknown>) {
@@ -52,6 +58,7 @@ class FakeApp extends EventEmitter {
   enableSandbox = vi.fn();
   isReady = vi.fn(() => false);
   requestSingleInstanceLock = vi.fn(() => true);
+  addRecentDocument = vi.fn();
   quit = vi.fn();
   whenReady = vi.fn(async () => undefined);
   getVersion = vi.fn(() => '0.0.0-test');
@@ -80,6 +87,17 @@ export const ipcMain = {
   removeHandler: vi.fn((channel: string) => void ipcMain.handlers.delete(channel)),
 };
 export const session = { defaultSession: fakeSession() };
+export const protocol = {
+  registerSchemesAsPrivileged: vi.fn(),
+  handlers: new Map<string, (request: { url: string; method?: string }) => Promise<Response>>(),
+  handle: vi.fn(
+    (scheme: string, fn: (request: { url: string; method?: string }) => Promise<Response>) =>
+      void protocol.handlers.set(scheme, fn),
+  ),
+};
+export const screen = {
+  getAllDisplays: vi.fn(() => [{ workArea: { x: 0, y: 0, width: 1920, height: 1080 } }]),
+};
 export const Menu = {
   buildFromTemplate: vi.fn((template: unknown[]) => ({ template })),
   setApplicationMenu: vi.fn(),
@@ -92,4 +110,15 @@ export const dialog = {
 export const contextBridge = { exposeInMainWorld: vi.fn() };
 export const ipcRenderer = { invoke: vi.fn(), on: vi.fn(), removeListener: vi.fn() };
 
-export default { app, ipcMain, session, Menu, dialog, BrowserWindow, contextBridge, ipcRenderer };
+export default {
+  app,
+  ipcMain,
+  session,
+  protocol,
+  screen,
+  Menu,
+  dialog,
+  BrowserWindow,
+  contextBridge,
+  ipcRenderer,
+};

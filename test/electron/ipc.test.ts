@@ -10,9 +10,9 @@ import {
   type TrustedPage,
 } from '../../electron/ipc.ts';
 
-const trust: TrustedPage = { indexUrl: 'file:///opt/Legwise/resources/app.asar/dist/index.html' };
+const trust: TrustedPage = { indexUrl: 'legwise://app/index.html' };
 const ourPage = {
-  url: 'file:///opt/Legwise/resources/app.asar/dist/index.html#/results',
+  url: 'legwise://app/index.html#/results',
   isMainFrame: true,
 };
 
@@ -73,6 +73,8 @@ describe('dispatch', () => {
     const senders = [
       { url: 'https://example.com/', isMainFrame: true },
       { url: 'file:///home/someone/evil.html', isMainFrame: true },
+      { url: 'legwise://app/other.html', isMainFrame: true },
+      { url: 'legwise://evil/index.html', isMainFrame: true },
       { url: ourPage.url, isMainFrame: false },
       { url: undefined, isMainFrame: true },
       { url: 'not a url', isMainFrame: true },

@@ -3,17 +3,17 @@ import { EventEmitter } from 'node:events';
 import { promises as fsp } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { newPlan } from '../../core/plan/defaults.ts';
 import { INVOKE_METHODS, channelOf } from '../../electron/channels.ts';
 import { autosavePaths } from '../../electron/files.ts';
 
 vi.mock('electron', () => import('./fakeElectron.ts'));
-import { BrowserWindow, Menu, app, dialog, ipcMain, session } from './fakeElectron.ts';
+import { BrowserWindow, Menu, app, dialog, ipcMain, protocol, session } from './fakeElectron.ts';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
-const indexUrl = pathToFileURL(path.join(root, 'dist', 'index.html')).href;
+const indexUrl = 'legwise://app/index.html';
 const fromPage = { senderFrame: { url: indexUrl, parent: null } };
 const invoke = (method: (typeof INVOKE_METHODS)[number], ...args: unknown[]) =>
   ipcMain.handlers.get(channelOf(method))?.(fromPage, ...args);
@@ -42,9 +42,16 @@ describe('electron/main.ts', () => {
     expect(session.defaultSession.webRequest.onBeforeRequest).toHaveBeenCalled();
   });
 
-  it('opens one window on the built page with the bundled preload', () => {
-    expect(win.loadFile).toHaveBeenCalledWith(path.join(root, 'dist', 'index.html'));
-    expect(win.loadURL).not.toHaveBeenCalled();
+  it('opens one window on the built page, through the shell’s protocol, with the preload', async () => {
+    expect(win.loadURL).toHaveBeenCalledWith('legwise://app/index.html');
+    expect(win.loadFile).not.toHaveBeenCalled();
+    expect(protocol.registerSchemesAsPrivileged).toHaveBeenCalledWith([
+      expect.objectContaining({ scheme: 'legwise' }),
+    ]);
+    // The handler serves dist/ only: a path out of it is not found.
+    const handler = protocol.handlers.get('legwise');
+    expect((await handler?.({ url: 'legwise://app/../package.json' }))?.status).toBe(404);
+    expect((await handler?.({ url: 'legwise://app/%2e%2e/package.json' }))?.status).toBe(404);
     const prefs = win.options.webPreferences as Record<string, unknown>;
     expect(prefs.preload).toBe(path.join(root, 'electron', 'preload.js'));
     expect(prefs.sandbox).toBe(true);

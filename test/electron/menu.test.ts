@@ -28,7 +28,32 @@ describe('buildMenuTemplate', () => {
       expect(byLabel(t, 'Open…')?.accelerator).toBe('CmdOrCtrl+O');
       expect(byLabel(t, 'Save')?.accelerator).toBe('CmdOrCtrl+S');
       expect(byLabel(t, 'Save As…')?.accelerator).toBe('CmdOrCtrl+Shift+S');
-      expect(byLabel(t, 'Export Report as PDF…')?.accelerator).toBe('CmdOrCtrl+P');
+      // Ctrl+P prints (the convention of every desktop program); PDF export keeps a shortcut.
+      expect(byLabel(t, 'Print…')?.accelerator).toBe('CmdOrCtrl+P');
+      expect(byLabel(t, 'Export Report as PDF…')?.accelerator).toBe('CmdOrCtrl+Shift+P');
+    }
+  });
+
+  it('Edit ▸ Undo/Redo go to the plan history; the page answers the keys off macOS', () => {
+    for (const platform of ['darwin', 'linux', 'win32'] as const) {
+      const h = handlers();
+      const t = buildMenuTemplate(platform, h, options);
+      const undo = byLabel(t, 'Undo');
+      const redo = byLabel(t, 'Redo');
+      expect(undo?.accelerator).toBe('CmdOrCtrl+Z');
+      expect(redo?.accelerator).toBe('CmdOrCtrl+Shift+Z');
+      expect(undo?.role).toBeUndefined(); // not the text box's own undo
+      expect(undo?.registerAccelerator).toBe(platform === 'darwin');
+      click(undo);
+      click(redo);
+      expect(h.command).toHaveBeenNthCalledWith(1, { kind: 'undo' });
+      expect(h.command).toHaveBeenNthCalledWith(2, { kind: 'redo' });
+      click(byLabel(t, 'Print…'));
+      click(byLabel(t, 'Keyboard Shortcuts and Guide'));
+      expect(h.command).toHaveBeenNthCalledWith(3, { kind: 'print' });
+      expect(h.command).toHaveBeenNthCalledWith(4, { kind: 'help' });
+      const roles = items(t).map((i) => i.role);
+      expect(roles).toEqual(expect.arrayContaining(['cut', 'copy', 'paste', 'selectAll']));
     }
   });
 
@@ -60,7 +85,7 @@ describe('buildMenuTemplate', () => {
 
   it('on Linux ends File with Quit (Ctrl+Q) and has About under Help', () => {
     const t = buildMenuTemplate('linux', handlers(), options);
-    expect(t.map((m) => m.label ?? m.role)).toEqual(['File', 'editMenu', 'View', 'Help']);
+    expect(t.map((m) => m.label ?? m.role)).toEqual(['File', 'Edit', 'View', 'Help']);
     const file = t[0]?.submenu as MenuItemConstructorOptions[];
     expect(file.at(-1)).toMatchObject({ label: 'Quit', accelerator: 'Ctrl+Q' });
     expect(byLabel(t, 'About Legwise')).toBeDefined();

@@ -61,6 +61,7 @@ function ports(answer: ChangedOnDiskChoice, overrides: Partial<ShellPorts> = {})
     askSaveBeforeClose: vi.fn(async () => 'cancel' as const),
     askChangedOnDisk: vi.fn(async (): Promise<ChangedOnDiskChoice> => answer),
     printPdf: vi.fn(async () => new Uint8Array()),
+    print: vi.fn(async () => undefined),
     showTitle: vi.fn(),
     recentChanged: vi.fn(),
     sendMenuCommand: vi.fn(),

@@ -40,8 +40,12 @@ describe('content security policy', () => {
 });
 
 describe('network policy', () => {
-  it('lets through our files only, and the local dev server while developing', () => {
-    expect(isAllowedRequestUrl('file:///opt/legwise/dist/assets/index.js')).toBe(true);
+  it('lets through our own page only, and the local dev server while developing', () => {
+    expect(isAllowedRequestUrl('legwise://app/assets/index.js')).toBe(true);
+    // The page is served by the shell's protocol: file:// (the disk) is never reachable.
+    expect(isAllowedRequestUrl('file:///opt/legwise/dist/assets/index.js')).toBe(false);
+    expect(isAllowedRequestUrl('file:///etc/passwd')).toBe(false);
+    expect(isAllowedRequestUrl('legwise://elsewhere/index.html')).toBe(false);
     expect(isAllowedRequestUrl('data:image/png;base64,AAAA')).toBe(true);
     expect(isAllowedRequestUrl('https://update.example.com/latest')).toBe(false);
     expect(isAllowedRequestUrl('http://127.0.0.1:5173/src/main.ts')).toBe(false);

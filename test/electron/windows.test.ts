@@ -34,12 +34,12 @@ describe('windowTitle', () => {
 });
 
 describe('createMainWindow', () => {
-  it('loads the built page from disk, never a remote URL', () => {
+  it('loads the built page through the shell’s protocol, never file:// or a remote URL', () => {
     const win = createMainWindow('/app/p.js', {
-      indexFile: '/app/dist/index.html',
+      indexUrl: 'legwise://app/index.html',
     }) as unknown as BrowserWindow;
-    expect(win.loadFile).toHaveBeenCalledWith('/app/dist/index.html');
-    expect(win.loadURL).not.toHaveBeenCalled();
+    expect(win.loadURL).toHaveBeenCalledWith('legwise://app/index.html');
+    expect(win.loadFile).not.toHaveBeenCalled();
     expect(win.options).toEqual(mainWindowOptions('/app/p.js'));
     win.emit('ready-to-show');
     expect(win.show).toHaveBeenCalled();
@@ -47,10 +47,22 @@ describe('createMainWindow', () => {
 
   it('uses the dev server only when one is given', () => {
     const win = createMainWindow('/app/p.js', {
-      indexFile: '/app/dist/index.html',
+      indexUrl: 'legwise://app/index.html',
       devServerUrl: 'http://127.0.0.1:5173/',
     }) as unknown as BrowserWindow;
     expect(win.loadURL).toHaveBeenCalledWith('http://127.0.0.1:5173/');
     expect(win.loadFile).not.toHaveBeenCalled();
+  });
+
+  it('opens at the restored size and position, maximized if it was', () => {
+    const bounds = { x: 40, y: 30, width: 1000, height: 700 };
+    const win = createMainWindow(
+      '/app/p.js',
+      { indexUrl: 'legwise://app/index.html' },
+      { bounds, maximized: true },
+    ) as unknown as BrowserWindow;
+    expect(win.options).toMatchObject(bounds);
+    win.emit('ready-to-show');
+    expect(win.maximize).toHaveBeenCalled();
   });
 });

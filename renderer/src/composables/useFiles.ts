@@ -34,7 +34,12 @@ export interface FileActions {
   exportGpx(text: string, name: string): Promise<ExportOutcome>;
   /** Exports the plan's route as GPX, with estimates at the waypoints when it can. */
   exportRoute(): Promise<ExportOutcome>;
+  /** Exports the report as a PDF file (the shell), or opens the print dialog (a browser). */
   printReport(): Promise<void>;
+  /** The system print dialog for the report. */
+  print(): Promise<void>;
+  /** Help ▸ Keyboard Shortcuts and Guide asks for the help panel. */
+  helpOpen: Ref<boolean>;
   restoreRecovered(): void;
   discardRecovered(): Promise<void>;
   /** Starts autosave and menu handling; returns a stop function. */
@@ -54,7 +59,7 @@ function pickFileText(): Promise<{ name: string; text: string } | null> {
   return new Promise((resolve) => {
     const input = document.createElement('input');
     input.type = 'file';
-    input.accept = '.json,application/json';
+    input.accept = '.legwise,.json,application/json';
     input.addEventListener('change', () => {
       const file = input.files?.[0];
       if (!file) return resolve(null);
@@ -73,6 +78,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
   const status = ref('');
   const openIssues = ref<PlanIssue[]>([]);
   const recovered = ref<Plan | null>(null);
+  const helpOpen = ref(false);
 
   const ensureValid = (what: string): Plan | null => {
     if (plan.valid.value) return plan.lastValid.value;
@@ -128,7 +134,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
       } else if (r.code !== 'CANCELLED') status.value = r.message;
       return;
     }
-    download(serializePlan(p), `${fileStem(p.name)}.legwise.json`, 'application/json');
+    download(serializePlan(p), `${fileStem(p.name)}.legwise`, 'application/json');
     plan.markSaved();
     status.value = 'Plan downloaded.';
   }
@@ -197,6 +203,29 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     }
   }
 
+  /** Ctrl+P / File ▸ Print: the report on paper through the system's print dialog. */
+  async function print(): Promise<void> {
+    window.dispatchEvent(new Event(PREPARE_PRINT_EVENT));
+    await nextTick();
+    try {
+      if (api) {
+        const out = await api.printReport();
+        if (!out.ok) status.value = out.message;
+      } else window.print();
+    } finally {
+      window.dispatchEvent(new Event(PRINT_DONE_EVENT));
+    }
+  }
+
+  async function openOffered(): Promise<void> {
+    if (!api) return;
+    const r = await api.openOffered();
+    if (r.ok) return opened(r.plan, r.filePath);
+    if (r.code === 'CANCELLED') return;
+    openIssues.value = r.issues ?? [];
+    status.value = r.message;
+  }
+
   function restoreRecovered(): void {
     if (recovered.value) plan.load(recovered.value, { unsaved: true });
     recovered.value = null;
@@ -231,6 +260,11 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
       exportPdf: printReport,
       exportCsv,
       exportGpx: async () => void (await exportRoute()),
+      print,
+      undo: async () => plan.undo(),
+      redo: async () => plan.redo(),
+      help: async () => void (helpOpen.value = true),
+      openOffered,
       openRecent: async () => {
         if (!api || command.kind !== 'openRecent') return;
         const r = await api.openRecent(command.filePath);
@@ -280,6 +314,8 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     exportGpx: (text, name) => saveGpx(text, name),
     exportRoute,
     printReport,
+    print,
+    helpOpen,
     restoreRecovered,
     discardRecovered,
     start,
