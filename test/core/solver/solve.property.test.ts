@@ -1,11 +1,13 @@
 /**
  * Invariants of solvePlan over random valid plans (fast-check): it never throws, every
  * number in the result is finite, the consumable never goes negative, the finiteness guard
- * never has to step in, and more fuel never shortens a cruise flown until the fuel is gone.
+ * never has to step in, more fuel never shortens a cruise flown until the fuel is gone, and a
+ * speed the planner chose never reads as a tight or failed stall margin.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { PlanSchema, type Leg, type Plan } from '../../../core/plan/schema.ts';
+import { speedChosenByPlanner } from '../../../core/solver/checks.ts';
 import { solvePlan } from '../../../core/solver/solve.ts';
 import type { PlanResult } from '../../../core/solver/types.ts';
 import { cruise, makePlan, numbersIn, propPowerplant, takeoff } from './fixtures.ts';
@@ -256,6 +258,29 @@ describe('solvePlan over random valid plans', () => {
       }),
       { numRuns: 250 },
     );
+  });
+
+  it('no tight or failed stall check on a leg whose speed the planner chose', () => {
+    // By construction (core/solver/speeds.ts): every best-range, best-endurance, best-rate and
+    // best-glide speed is searched from stallFactor × V_stall up, so its stall check is
+    // information (checks.ts), never a margin the user would have to act on.
+    let seen = 0;
+    fc.assert(
+      fc.property(planArb, (plan) => {
+        const r = solvePlan(plan, { samplesPerLeg: 2, tolerance: 'fast' });
+        for (const c of r.checks) {
+          if (!c.id.startsWith('stall:') || c.legIndex === null) continue;
+          if (!speedChosenByPlanner(plan.legs[c.legIndex]!)) continue;
+          seen++;
+          expect(c.state).toBe('ok');
+          expect(c.chosenSpeed).toBeDefined();
+          // and the speed does keep the margin (to the integrator's event tolerance)
+          expect(c.value).toBeGreaterThanOrEqual(plan.settings.stallFactor * (1 - 1e-6));
+        }
+      }),
+      { numRuns: 200 },
+    );
+    expect(seen).toBeGreaterThan(20); // the property was exercised on many chosen-speed legs
   });
 
   it('the same with a route and a winds-aloft table on random legs', () => {
