@@ -51,7 +51,8 @@ function resolution(quantity: Quantity, unit: UnitId, value: number): Resolution
       if (unit === 'ft') return isWhole(value) ? { decimals: 0 } : { step: 10, decimals: 0 };
       return { decimals: unit === 'm' ? 0 : 1 };
     case 'distance':
-      return { decimals: unit === 'm' || unit === 'ft' ? 0 : 1 };
+      // 0.1 km or NM; whole ones from 1000 on (a sector of 1872 km needs no tenths).
+      return { decimals: unit === 'm' || unit === 'ft' || a >= 999.95 ? 0 : 1 };
     case 'shortDistance':
     case 'thrust':
     case 'angle':

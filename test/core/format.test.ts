@@ -26,6 +26,9 @@ describe('formatQuantity', () => {
   it('distance to 0.1 NM or 0.1 km', () => {
     expect(formatQuantity(1852 * 12.34, 'distance', 'aviation')).toBe('12.3 NM'); // nmi = 1852 m exact
     expect(formatQuantity(460_000, 'distance', 'si')).toBe('460.0 km');
+    // Whole units from 1000 on: a long sector reads 1872 km, not 1871.9 (common practice).
+    expect(formatQuantity(1_871_900, 'distance', 'si')).toBe('1872 km');
+    expect(formatQuantity(1852 * 999.94, 'distance', 'aviation')).toBe('999.9 NM');
   });
 
   it('speeds in kt, m/s and ft/min', () => {
