@@ -5,7 +5,7 @@
  * not warnings here: the solver reports them as failed checks.
  */
 import { fromSI, WH } from '../units.ts';
-import type { Plan } from './schema.ts';
+import type { JetPowerplant, Plan } from './schema.ts';
 
 /** Common practice: small UAVs are the aircraft up to 150 kg MTOW (from memory). */
 export const SMALL_UAV_MAX_MTOW_KG = 150;
@@ -87,23 +87,7 @@ function powerplantWarnings(plan: Plan, cls: AircraftClass, out: string[]): void
   const pp = plan.aircraft.powerplant;
   const at = 'aircraft.powerplant';
   if (pp.type === 'jet') {
-    const tsfc = fromSI(pp.tsfc_kg_Ns, 'lb_lbfh');
-    check(
-      out,
-      `${at}.tsfc_kg_Ns`,
-      tsfc,
-      {
-        min: 0.5,
-        max: 1.1,
-        what: 'from high-bypass turbofans (0.5–0.65) to turbojets (0.9–1.1)',
-      },
-      'lb/(lbf·h)',
-    );
-    check(out, `${at}.thrustLapseExponent`, pp.thrustLapseExponent, {
-      min: 0.7,
-      max: 1,
-      what: 'for the density exponent of thrust lapse',
-    });
+    jetWarnings(pp, at, out);
   } else if (pp.type === 'propeller') {
     const bsfc = fromSI(pp.bsfc_kg_J, 'lb_hph');
     const range =
@@ -163,6 +147,39 @@ function windWarnings(plan: Plan, out: string[]): void {
       );
     }
   });
+}
+
+/** ISA at 11 000 m, M 0.8: where a Mach-and-θ TSFC is compared with cruise values. */
+const CRUISE_CHECK_THETA = 216.65 / 288.15;
+const CRUISE_CHECK_MACH = 0.8;
+
+function jetWarnings(pp: JetPowerplant, at: string, out: string[]): void {
+  const varying = pp.tsfcMachFactor !== undefined;
+  const cruise = varying
+    ? pp.tsfc_kg_Ns *
+      (1 + (pp.tsfcMachFactor ?? 0) * CRUISE_CHECK_MACH) *
+      Math.sqrt(CRUISE_CHECK_THETA)
+    : pp.tsfc_kg_Ns;
+  check(
+    out,
+    varying ? `${at}.tsfc_kg_Ns (TSFC at M 0.8, 11 000 m ISA)` : `${at}.tsfc_kg_Ns`,
+    fromSI(cruise, 'lb_lbfh'),
+    {
+      min: 0.5,
+      max: 1.1,
+      what: 'from high-bypass turbofans (0.5–0.65) to turbojets (0.9–1.1)',
+    },
+    'lb/(lbf·h)',
+  );
+  // σ^n standing in for a Mach lapse: n ≈ 0.7 for a turbojet up to ≈ 1.4 for a high-bypass
+  // fan at cruise Mach (1.40 matches Mattingly's high-bypass lapse at 35 000 ft, M 0.72).
+  if (pp.thrustLapse === undefined && pp.thrustLapseExponent !== undefined) {
+    check(out, `${at}.thrustLapseExponent`, pp.thrustLapseExponent, {
+      min: 0.7,
+      max: 1.5,
+      what: 'for the density exponent of thrust lapse',
+    });
+  }
 }
 
 /** Plain-language warnings, each naming the field and the common range. */

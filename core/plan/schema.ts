@@ -53,14 +53,32 @@ export const FuelSchema = z.object({
   tankCapacity_L: bounded(0, 300_000, 'L', true),
 });
 
+/** Installed thrust lapse of an engine class (Mattingly, Aircraft Engine Design, ch. 2). */
+export const JetLapseSchema = z.object({
+  engineClass: z.enum(['highBypass', 'lowBypass', 'turbojet']),
+  /** θ₀ at the throttle break (1.0–1.1 common practice; 1 = break at sea-level static). */
+  throttleRatio: bounded(0.8, 1.3),
+  /** Overrides the class's coefficient of √M (0.49 high-bypass, 0 low-bypass, 0.16 turbojet). */
+  machCoefficient: bounded(0, 1.5).optional(),
+  /** Overrides the class's coefficient above the throttle break (3, 3.8, 24). */
+  breakCoefficient: bounded(0, 50).optional(),
+});
+
 export const JetSchema = z.object({
   type: z.literal('jet'),
   /** Total maximum thrust at sea level, ISA. */
   maxThrustSL_N: bounded(0, 2_000_000, 'N', true),
-  /** T_max = T_SL · σ^n (common practice, n ≈ 0.7–1). */
-  thrustLapseExponent: bounded(0, 2),
-  /** Thrust-specific fuel consumption, kg/(N·s). */
+  /** Density lapse T_max = T_SL · σ^n (common practice); used when `thrustLapse` is absent. */
+  thrustLapseExponent: bounded(0, 2).optional(),
+  /** Lapse with Mach and altitude by engine class (core/propulsion/jet.ts; Mattingly). */
+  thrustLapse: JetLapseSchema.optional(),
+  /**
+   * Thrust-specific fuel consumption, kg/(N·s): the value at every condition, or with
+   * `tsfcMachFactor` the sea-level static c₁ of TSFC = c₁·(1 + f·M)·√θ.
+   */
   tsfc_kg_Ns: bounded(0, 1e-3, 'kg/(N·s)', true),
+  /** f = c₂/c₁ of TSFC = (c₁ + c₂·M)·√θ (high-bypass 1.2, Mattingly, from memory). */
+  tsfcMachFactor: bounded(0, 5).optional(),
   /** Fuel flow at idle as a fraction of the flow at maximum thrust (descent, glide). */
   idleFuelFraction: fraction(0, 0.5),
   fuel: FuelSchema,
@@ -527,6 +545,7 @@ export type Aircraft = z.infer<typeof AircraftSchema>;
 export type Polar = z.infer<typeof PolarSchema>;
 export type Powerplant = z.infer<typeof PowerplantSchema>;
 export type JetPowerplant = z.infer<typeof JetSchema>;
+export type JetLapse = z.infer<typeof JetLapseSchema>;
 export type PropellerPowerplant = z.infer<typeof PropellerSchema>;
 export type ElectricPowerplant = z.infer<typeof ElectricSchema>;
 export type Battery = z.infer<typeof BatterySchema>;

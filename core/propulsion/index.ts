@@ -5,7 +5,7 @@
  * propeller's efficiency with airspeed, propellerCurve.ts.
  *
  * Below the idle setting the idle consumption applies (the engine keeps running in a descent
- * or glide): jet idleFuelFraction·TSFC·T_max; propeller BSFC·idlePowerFraction·P_max;
+ * or glide): jet idleFuelFraction·TSFC·(T_max, or T_SL·δ with a class lapse; jet.ts); propeller BSFC·idlePowerFraction·P_max;
  * electric 0 (a windmilling or stopped propeller draws nothing; common practice).
  */
 import type { AtmosphereState } from '../atmosphere.ts';
@@ -19,10 +19,17 @@ import {
   propellerCurve,
   type PropellerCurve,
 } from './propellerCurve.ts';
-import { jetFuelFlow_kg_s, maxThrust_N } from './jet.ts';
+import { idleReferenceThrust_N, jetFuelFlow_kg_s, maxThrust_N } from './jet.ts';
 import { maxShaftPower_W, propFuelFlow_kg_s } from './propeller.ts';
 
-export { maxThrust_N, jetFuelFlow_kg_s, weightSpecificTsfc_1_s } from './jet.ts';
+export {
+  maxThrust_N,
+  jetFuelFlow_kg_s,
+  weightSpecificTsfc_1_s,
+  tsfcAt_kg_Ns,
+  classLapse,
+  totalRatios,
+} from './jet.ts';
 export {
   maxShaftPower_W,
   propFuelFlow_kg_s,
@@ -36,6 +43,11 @@ export { propellerCurve, type PropellerCurve } from './propellerCurve.ts';
 function propEfficiency(eta: number): number {
   requireFinite('propEfficiency', eta, 0, 1);
   return requirePositive('propEfficiency', eta);
+}
+
+/** Flight Mach number V/a (the jet models ask for it). */
+function machOf(atm: AtmosphereState, V_m_s: number): number {
+  return V_m_s / requirePositive('atm.a_m_s', atm.a_m_s, 'm/s');
 }
 
 export function consumableOf(pp: Powerplant): 'fuel' | 'battery' {
@@ -62,7 +74,7 @@ export function availableThrustPower_W(
   curve?: PropellerCurve,
 ): number {
   requirePositive('V_m_s', V_m_s, 'm/s');
-  if (pp.type === 'jet') return maxThrust_N(pp, atm) * V_m_s;
+  if (pp.type === 'jet') return maxThrust_N(pp, atm, machOf(atm, V_m_s)) * V_m_s;
   propEfficiency(pp.propEfficiency);
   // Electric motors do not lapse with density (ElectricSchema).
   const P =
@@ -92,8 +104,9 @@ export function consumptionRate(
   switch (pp.type) {
     case 'jet': {
       const idle = requireFinite('idleFuelFraction', pp.idleFuelFraction, 0, 1);
-      const idle_N = idle * maxThrust_N(pp, atm);
-      return jetFuelFlow_kg_s(pp, Math.max(demand_W / V_m_s, idle_N));
+      const M = machOf(atm, V_m_s);
+      const idle_N = idle * idleReferenceThrust_N(pp, atm, M);
+      return jetFuelFlow_kg_s(pp, Math.max(demand_W / V_m_s, idle_N), atm, M);
     }
     case 'propeller': {
       const idle = requireFinite('idlePowerFraction', pp.idlePowerFraction, 0, 1);

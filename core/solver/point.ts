@@ -189,7 +189,7 @@ export function evaluatePoint(
   const CD = dragCoefficientOf(model.polar, CL);
   const D = q * S * CD;
   const rho = amb.atm.rho_kg_m3;
-  const avail = availablePower_W(model.power, amb.engineMax, V, rho);
+  const avail = availablePower_W(model.power, amb, V, rho);
   let climb = 0;
   let thrust = D * V;
   let required = D * V;
@@ -248,8 +248,8 @@ export function evaluatePoint(
   out.thrustPower_W = thrust;
   out.powerRequired_W = required;
   out.powerAvailable_W = avail;
-  out.rate = consumption(model.power, amb.engineMax, thrust, V, rho);
-  out.idleExcess = idleExcess(model.power, amb.engineMax, thrust, V, rho);
+  out.rate = consumption(model.power, amb, thrust, V, rho);
+  out.idleExcess = idleExcess(model.power, amb, thrust, V, rho);
   out.climb_m_s = climb;
   out.accelFactor = accel;
   out.stallRatio = Math.sqrt(model.polar.CLmax / CL);

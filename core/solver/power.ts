@@ -1,6 +1,7 @@
 /**
  * The powerplant as the integrator's right-hand side sees it: the models of
- * core/propulsion/index.ts (jet T_max = T_SL·σ^n and TSFC·T; propeller Gagg–Ferrar or σ^n
+ * core/propulsion/index.ts (jet T_max = T_SL·σ^n or the engine-class lapse with Mach, and
+ * TSFC·T with TSFC = c₁(1 + f·M)√θ; propeller Gagg–Ferrar or σ^n
  * lapse and BSFC·P; electric drivetrain efficiency and Traub's 2011 Peukert drain; for both
  * propeller powerplants the efficiency curve η(V, P) of core/propulsion/propellerCurve.ts —
  * constant, momentum theory or a table), evaluated
@@ -21,6 +22,7 @@ import {
   propellerCurve,
   type PropellerCurve,
 } from '../propulsion/propellerCurve.ts';
+import { classLapse, classLapseOf, type ClassLapse } from '../propulsion/jet.ts';
 import {
   availableThrustPower_W,
   chainEfficiency,
@@ -47,7 +49,21 @@ export interface PowerConstants {
   /** Electric: Peukert exponent n and Rt/E_nominal (s/J); others 1 and 0. */
   peukertExponent: number;
   ratedTimeOverEnergy_s_J: number;
+  /** Jet: the engine-class lapse (null: density lapse, already in engineMax). */
+  lapse: ClassLapse | null;
+  /** Jet: sea-level static thrust (N); others 0. */
+  thrustSL_N: number;
+  /** Jet: f of TSFC = c₁(1 + f·M)√θ, or null for a constant TSFC. */
+  tsfcMachFactor: number | null;
 }
+
+/** What the powerplant needs to know about the air: the state and the cached engine maximum. */
+export interface EngineAir {
+  atm: AtmosphereState;
+  engineMax: number;
+}
+
+const NOT_JET = { lapse: null, thrustSL_N: 0, tsfcMachFactor: null } as const;
 
 /** Validates the powerplant through core/propulsion (throws InputError) and keeps its constants. */
 export function powerConstants(
@@ -72,6 +88,9 @@ export function powerConstants(
         driveEfficiency: 1,
         peukertExponent: 1,
         ratedTimeOverEnergy_s_J: 0,
+        lapse: classLapseOf(pp),
+        thrustSL_N: pp.maxThrustSL_N,
+        tsfcMachFactor: pp.tsfcMachFactor ?? null,
       };
     case 'propeller':
       return {
@@ -84,6 +103,7 @@ export function powerConstants(
         driveEfficiency: 1,
         peukertExponent: 1,
         ratedTimeOverEnergy_s_J: 0,
+        ...NOT_JET,
       };
     case 'electric':
       return {
@@ -96,12 +116,14 @@ export function powerConstants(
         driveEfficiency: pp.motorEfficiency * pp.controllerEfficiency,
         peukertExponent: pp.battery.peukertExponent,
         ratedTimeOverEnergy_s_J: pp.battery.ratedDischargeTime_s / pp.battery.energy_J,
+        ...NOT_JET,
       };
   }
 }
 
 /**
- * The altitude-dependent maximum of the engine: T_max (N) for a jet, shaft P_max (W) for a
+ * The altitude-dependent maximum of the engine: T_max (N) for a jet (static, M = 0, for the
+ * engine-class lapse; `jetThrustMax_N` adds the Mach effect), shaft P_max (W) for a
  * propeller engine (with its lapse and critical altitude), the motor's shaft power (W) for
  * electric (no lapse).
  */
@@ -120,15 +142,33 @@ export function engineMaximum(
   }
 }
 
-/** Maximum thrust power at TAS V: jet T_max·V, otherwise η(V, P_max)·P_max. */
+/** Jet maximum thrust at TAS V: the cached density lapse, or the class lapse at M = V/a. */
+export function jetThrustMax_N(c: PowerConstants, air: EngineAir, V_m_s: number): number {
+  if (c.lapse === null) return air.engineMax;
+  return c.thrustSL_N * classLapse(c.lapse, air.atm, V_m_s / air.atm.a_m_s);
+}
+
+/** Jet thrust the idle fraction applies to (core/propulsion/jet.ts): T_max, or T_SL·δ. */
+function jetIdleReference_N(c: PowerConstants, air: EngineAir): number {
+  return c.lapse === null ? air.engineMax : c.thrustSL_N * air.atm.delta;
+}
+
+/** Jet TSFC at TAS V: c₁(1 + f·M)√θ, or the constant. */
+function jetTsfc(c: PowerConstants, atm: AtmosphereState, V_m_s: number): number {
+  const f = c.tsfcMachFactor;
+  if (f === null) return c.sfc;
+  return c.sfc * (1 + (f * V_m_s) / atm.a_m_s) * Math.sqrt(atm.theta);
+}
+
+/** Maximum thrust power at TAS V: jet T_max(M)·V, otherwise η(V, P_max)·P_max. */
 export function availablePower_W(
   c: PowerConstants,
-  engineMax: number,
+  air: EngineAir,
   V_m_s: number,
   rho_kg_m3: number,
 ): number {
-  if (c.type === 'jet') return engineMax * V_m_s;
-  return curveEfficiency(c.prop, engineMax, V_m_s, rho_kg_m3) * engineMax;
+  if (c.type === 'jet') return jetThrustMax_N(c, air, V_m_s) * V_m_s;
+  return curveEfficiency(c.prop, air.engineMax, V_m_s, rho_kg_m3) * air.engineMax;
 }
 
 /** Shaft power for a thrust power ≥ 0 at TAS V (propeller and electric; jet: unused). */
@@ -143,24 +183,26 @@ export function shaftPowerFor(
 }
 
 /**
- * Consumption for a thrust power (≤ 0 means idle): fuel kg/s (jet TSFC·max(T, idle·T_max);
+ * Consumption for a thrust power (≤ 0 means idle): fuel kg/s (jet TSFC(M,θ)·max(T, idle·T_ref);
  * propeller BSFC·max(P_shaft, idle·P_max)) or battery drain W (electric P_shaft/(η_m·η_c),
  * Peukert applied at or above the rated discharge power).
  */
 export function consumption(
   c: PowerConstants,
-  engineMax: number,
+  air: EngineAir,
   thrustPower_W: number,
   V_m_s: number,
   rho_kg_m3: number,
 ): number {
   const demand = thrustPower_W > 0 ? thrustPower_W : 0;
   switch (c.type) {
-    case 'jet':
-      return c.sfc * Math.max(demand / V_m_s, c.idleFraction * engineMax);
+    case 'jet': {
+      const idle_N = c.idleFraction * jetIdleReference_N(c, air);
+      return jetTsfc(c, air.atm, V_m_s) * Math.max(demand / V_m_s, idle_N);
+    }
     case 'propeller':
       return (
-        c.sfc * Math.max(shaftPowerFor(c, demand, V_m_s, rho_kg_m3), c.idleFraction * engineMax)
+        c.sfc * Math.max(shaftPowerFor(c, demand, V_m_s, rho_kg_m3), c.idleFraction * air.engineMax)
       );
     case 'electric': {
       // Peukert only at or above the rated discharge power (core/propulsion/electric.ts).
@@ -174,24 +216,27 @@ export function consumption(
 
 /**
  * How far the demand is above the idle floor, as a fraction of the maximum: jet
- * (P/V − idle·T_max)/T_max, propeller (P_shaft − idle·P_max)/P_max, electric P_shaft/P_max
- * (its floor is at zero thrust power). The consumption has a kink where this crosses 0; the
- * integrator restarts there instead of stepping across it (segment.ts).
+ * (P/V − idle·T_ref)/T_ref with T_ref the idle reference thrust (T_max or T_SL·δ), propeller
+ * (P_shaft − idle·P_max)/P_max, electric P_shaft/P_max (its floor is at zero thrust power).
+ * The consumption has a kink where this crosses 0; the integrator restarts there instead of
+ * stepping across it (segment.ts).
  */
 export function idleExcess(
   c: PowerConstants,
-  engineMax: number,
+  air: EngineAir,
   thrustPower_W: number,
   V_m_s: number,
   rho_kg_m3: number,
 ): number {
   switch (c.type) {
-    case 'jet':
-      return thrustPower_W / V_m_s / engineMax - c.idleFraction;
+    case 'jet': {
+      const T = jetIdleReference_N(c, air);
+      return thrustPower_W / V_m_s / T - c.idleFraction;
+    }
     case 'propeller':
-      return signedShaft(c, thrustPower_W, V_m_s, rho_kg_m3) / engineMax - c.idleFraction;
+      return signedShaft(c, thrustPower_W, V_m_s, rho_kg_m3) / air.engineMax - c.idleFraction;
     case 'electric':
-      return signedShaft(c, thrustPower_W, V_m_s, rho_kg_m3) / engineMax;
+      return signedShaft(c, thrustPower_W, V_m_s, rho_kg_m3) / air.engineMax;
   }
 }
 

@@ -159,7 +159,7 @@ const SPEED_STEP = 1e-3;
 /** Excess thrust power τ·P_avail − D·V of level flight at V in the air of `ctx`. */
 function excessPower(ctx: SpeedContext, tau: number, V: number): number {
   return (
-    tau * availablePower_W(ctx.model.power, ctx.amb.engineMax, V, ctx.amb.atm.rho_kg_m3) -
+    tau * availablePower_W(ctx.model.power, ctx.amb, V, ctx.amb.atm.rho_kg_m3) -
     levelDrag_N(ctx, V) * V
   );
 }

@@ -10,8 +10,9 @@
  * search runs over [stallFactor·V_stall, Mach 0.9] (the polar carries no compressibility);
  * a range or endurance optimum that needs more power than available is moved to the speed
  * where the power required meets the power available. Best endurance, best glide and best
- * range in still air are lift coefficients (optimumCL.ts), so no search is needed there; best
- * range in wind and best climb are bounded 1-D searches (optimize1d.ts), warm-started from
+ * range in still air are lift coefficients (optimumCL.ts), so no search is needed there
+ * (except for a jet whose TSFC varies with Mach); best range in wind and best climb are
+ * bounded 1-D searches (optimize1d.ts), warm-started from
  * the answer at the previous state.
  */
 import type { PolarCoefficients } from '../polar.ts';
@@ -61,11 +62,11 @@ export function levelDrag_N(ctx: SpeedContext, V: number): number {
 }
 
 function rateAt(ctx: SpeedContext, thrustPower_W: number, V: number): number {
-  return consumption(ctx.model.power, ctx.amb.engineMax, thrustPower_W, V, ctx.amb.atm.rho_kg_m3);
+  return consumption(ctx.model.power, ctx.amb, thrustPower_W, V, ctx.amb.atm.rho_kg_m3);
 }
 
 function availableAt(ctx: SpeedContext, V: number): number {
-  return availablePower_W(ctx.model.power, ctx.amb.engineMax, V, ctx.amb.atm.rho_kg_m3);
+  return availablePower_W(ctx.model.power, ctx.amb, V, ctx.amb.atm.rho_kg_m3);
 }
 
 /** The propeller's efficiency changes with speed, so the optima are no longer lift coefficients. */
@@ -122,7 +123,9 @@ export function bestRangeTas(ctx: SpeedContext): SpeedChoice {
   const cw = ctx.crosswind_m_s;
   if (hw === 0 && cw === 0 && !variableEfficiency(ctx)) {
     const power = ctx.model.power;
-    if (power.type === 'electric' && power.peukertExponent !== 1) {
+    if (machDependentTsfc(ctx)) {
+      // TSFC rises with Mach: the optimum is no fixed lift coefficient; search below.
+    } else if (power.type === 'electric' && power.peukertExponent !== 1) {
       const choice = electricStillAirRange(ctx);
       if (choice !== null) return choice;
     } else {
@@ -181,6 +184,9 @@ function aboveIdle(ctx: SpeedContext, V: number): boolean {
  * least demand is still taken, so that the choice stays a smooth function of the state.
  */
 export function bestEnduranceTas(ctx: SpeedContext): SpeedChoice {
+  if (machDependentTsfc(ctx)) {
+    return choose(ctx, (V) => 1 / rateAt(ctx, levelDrag_N(ctx, V) * V, V), true);
+  }
   if (variableEfficiency(ctx)) {
     // Least shaft power D·V/η(V): a search, since η rises with V (propellerCurve.ts).
     const c = ctx.model.power;
@@ -188,6 +194,14 @@ export function bestEnduranceTas(ctx: SpeedContext): SpeedChoice {
     return choose(ctx, (V) => -shaftPowerFor(c, levelDrag_N(ctx, V) * V, V, rho), true);
   }
   return atLiftCoefficient(ctx, ctx.model.optimumCL.endurance);
+}
+
+/**
+ * A jet whose TSFC grows with Mach (core/propulsion/jet.ts): its range and endurance optima
+ * are no longer fixed lift coefficients, so they are searched like the range in wind.
+ */
+function machDependentTsfc(ctx: SpeedContext): boolean {
+  return ctx.model.power.type === 'jet' && ctx.model.power.tsfcMachFactor !== null;
 }
 
 /** Best rate of climb at a throttle setting: most excess thrust power τ·P_avail − D·V. */

@@ -335,9 +335,9 @@ describe('check sentences in the chosen units', () => {
 describe('tune wording', () => {
   it('says when the best altitude is the ceiling', () => {
     const data = demoJson('light-jet.json');
-    setAt(data, 'aircraft.ceiling_m', 9000);
+    setAt(data, 'aircraft.ceiling_m', 7000);
     const { out } = run(['tune', 'j.json'], { 'j.json': JSON.stringify(data) });
-    expect(out).toMatch(/\n {2}9000 m, limited by the ceiling: \d+ kg left on landing/);
+    expect(out).toMatch(/\n {2}7000 m, limited by the ceiling: \d+ kg left on landing/);
   });
 
   it('says where the sweep starts when the plan as given does better', () => {

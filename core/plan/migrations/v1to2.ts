@@ -8,12 +8,17 @@
 import type { RawPlan } from '../migrate.ts';
 import { finalReserveAtCruise } from './finalReserveAtCruise.ts';
 import { propellerCurvePart } from './propellerCurve.ts';
+import { jetMachLapse } from './jetMachLapse.ts';
 
 /** One part of the step: returns the lifted plan and pushes a note per change it made. */
 export type MigrationPart = (raw: RawPlan, notes: string[]) => RawPlan;
 
 /** The parts of the 1 → 2 step, in the order they run. */
-export const V1_TO_V2_PARTS: readonly MigrationPart[] = [propellerCurvePart, finalReserveAtCruise];
+export const V1_TO_V2_PARTS: readonly MigrationPart[] = [
+  propellerCurvePart,
+  finalReserveAtCruise,
+  jetMachLapse,
+];
 
 export function migrateV1toV2(raw: RawPlan, notes: string[]): RawPlan {
   let out = raw;

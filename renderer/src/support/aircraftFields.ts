@@ -2,9 +2,10 @@
  * The aircraft sheet and the mission conditions as field lists. Which fields appear
  * follows the plan: the powerplant kind, how the induced drag is given, the lapse model.
  */
-import type { Plan, Powerplant, Fuel } from '../../../core/plan/schema.ts';
+import type { JetPowerplant, Plan, Powerplant, Fuel } from '../../../core/plan/schema.ts';
 import { choice, num, text, type FieldDef, type FieldSection } from './fieldTypes.ts';
 import { missionWindFields } from './missionWindFields.ts';
+import { setAtPath } from './paths.ts';
 
 const A = 'aircraft';
 
@@ -97,9 +98,18 @@ function powerplantFields(pp: Powerplant): FieldDef[] {
     case 'jet':
       return [
         kind,
-        num(`${p}.maxThrustSL_N`, 'Max thrust, sea level', 'thrust', 'N'),
-        num(`${p}.thrustLapseExponent`, 'Thrust lapse exponent n (T = T₀·σⁿ)', null, 'fraction'),
-        num(`${p}.tsfc_kg_Ns`, 'TSFC', 'tsfc', 'kg_Ns'),
+        num(`${p}.maxThrustSL_N`, 'Max thrust, sea level static', 'thrust', 'N'),
+        ...jetLapseFields(pp),
+        num(
+          `${p}.tsfc_kg_Ns`,
+          pp.tsfcMachFactor === undefined ? 'TSFC' : 'TSFC c₁ (sea level, static)',
+          'tsfc',
+          'kg_Ns',
+        ),
+        num(`${p}.tsfcMachFactor`, 'TSFC Mach factor f = c₂/c₁', null, 'fraction', {
+          optional: true,
+          hint: 'TSFC = c₁·(1 + f·M)·√θ; empty = constant TSFC; high bypass 1.2',
+        }),
         num(`${p}.idleFuelFraction`, 'Idle fuel flow (of max)', 'ratio', 'fraction'),
         ...fuelFields(`${p}.fuel`),
       ];
@@ -143,6 +153,65 @@ function powerplantFields(pp: Powerplant): FieldDef[] {
         num(`${p}.battery.ratedDischargeTime_s`, 'Rated discharge time', 'time', 's'),
       ];
   }
+}
+
+const ENGINE_CLASS_DEFAULTS: Record<string, string> = {
+  highBypass: '0.49 and 3',
+  lowBypass: '0 and 3.8',
+  turbojet: '0.16 and 24',
+};
+
+/** Jet thrust lapse: σⁿ, or an engine class with its throttle ratio and optional coefficients. */
+function jetLapseFields(pp: JetPowerplant): FieldDef[] {
+  const p = `${A}.powerplant`;
+  const model = {
+    ...choice(`${p}.thrustLapse.engineClass`, 'Thrust lapse', [
+      { value: 'density', label: 'σⁿ (density only)' },
+      { value: 'highBypass', label: 'High-bypass turbofan (with Mach)' },
+      { value: 'lowBypass', label: 'Low-bypass turbofan (with Mach)' },
+      { value: 'turbojet', label: 'Turbojet (with Mach)' },
+    ]),
+    fallback: 'density',
+    apply: (plan: Plan, v: string) => setAtPath(plan, p, jetLapseVariant(pp, v)),
+  };
+  if (pp.thrustLapse === undefined) {
+    return [
+      model,
+      num(`${p}.thrustLapseExponent`, 'Thrust lapse exponent n (T = T₀·σⁿ)', null, 'fraction'),
+    ];
+  }
+  const d = ENGINE_CLASS_DEFAULTS[pp.thrustLapse.engineClass] ?? '';
+  return [
+    model,
+    num(`${p}.thrustLapse.throttleRatio`, 'Throttle ratio (θ₀ at the break)', null, 'fraction', {
+      hint: '1.0–1.1 common practice',
+    }),
+    num(`${p}.thrustLapse.machCoefficient`, 'Lapse coefficient of √M', null, 'fraction', {
+      optional: true,
+      hint: `optional; class values ${d} (√M, break)`,
+    }),
+    num(
+      `${p}.thrustLapse.breakCoefficient`,
+      'Lapse coefficient above the break',
+      null,
+      'fraction',
+      {
+        optional: true,
+        hint: 'optional',
+      },
+    ),
+  ];
+}
+
+/** The jet with another lapse model, keeping what still applies. */
+function jetLapseVariant(pp: JetPowerplant, v: string): JetPowerplant {
+  const { thrustLapse, ...rest } = pp;
+  if (v === 'density') return { ...rest, thrustLapseExponent: pp.thrustLapseExponent ?? 0.8 };
+  const engineClass = v as NonNullable<JetPowerplant['thrustLapse']>['engineClass'];
+  return {
+    ...rest,
+    thrustLapse: { engineClass, throttleRatio: thrustLapse?.throttleRatio ?? 1.05 },
+  };
 }
 
 function fuelFields(p: string): FieldDef[] {

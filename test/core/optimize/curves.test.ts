@@ -57,7 +57,7 @@ describe('powerCurves', () => {
     if (pp.type !== 'jet') throw new Error('jet fixture');
     // Thrust lapse T = T_SL·σ^n (common practice, as the plan schema defines it).
     for (const t of r.thrustAvailable_N)
-      expectRel(t, pp.maxThrustSL_N * sigma ** pp.thrustLapseExponent, 1e-9);
+      expectRel(t, pp.maxThrustSL_N * sigma ** (pp.thrustLapseExponent ?? NaN), 1e-9);
   });
 
   it('refuses an index outside the plan', () => {

@@ -64,22 +64,49 @@ describe('planWarnings', () => {
   });
 
   it('TSFC in lb/(lbf·h): 0.5–1.1 from high-bypass to turbojet (Raymer, from memory)', () => {
-    const low = plan(JET, { 'aircraft.powerplant.tsfc_kg_Ns': 0.4 * LB_LBFH });
+    // A constant TSFC (no Mach factor) is judged as it is.
+    const constant = { 'aircraft.powerplant.tsfcMachFactor': undefined };
+    const low = plan(JET, { ...constant, 'aircraft.powerplant.tsfc_kg_Ns': 0.4 * LB_LBFH });
     expect(warningFor(low, 'aircraft.powerplant.tsfc_kg_Ns')).toMatch(
       /: 0\.4 lb\/\(lbf·h\) is below .*\(0\.5–1\.1 lb\/\(lbf·h\)/,
     );
     expect(
       warningFor(
-        plan(JET, { 'aircraft.powerplant.tsfc_kg_Ns': 0.6 * LB_LBFH }),
+        plan(JET, { ...constant, 'aircraft.powerplant.tsfc_kg_Ns': 0.6 * LB_LBFH }),
         'aircraft.powerplant.tsfc_kg_Ns',
       ),
     ).toBeUndefined();
     expect(
       warningFor(
-        plan(JET, { 'aircraft.powerplant.tsfc_kg_Ns': 1.3 * LB_LBFH }),
+        plan(JET, { ...constant, 'aircraft.powerplant.tsfc_kg_Ns': 1.3 * LB_LBFH }),
         'aircraft.powerplant.tsfc_kg_Ns',
       ),
     ).toContain('1.3 lb/(lbf·h) is above');
+  });
+
+  it('a TSFC that varies with Mach and θ is judged at M 0.8, 11 000 m ISA (cruise values)', () => {
+    // Mattingly's high-bypass c₁ 0.45 lb/(lbf·h), c₂/c₁ 1.2 (from memory): at M 0.8 and
+    // √θ = √(216.65/288.15) the TSFC is 0.45·1.96·0.86711 = 0.7648 (hand evaluation), above
+    // Raymer's 0.5–0.65 for high bypass but inside the 0.5–1.1 span; c₁ 0.2 gives 0.34.
+    const field = 'aircraft.powerplant.tsfc_kg_Ns (TSFC at M 0.8, 11 000 m ISA)';
+    const at = (c1: number) =>
+      warningFor(plan(JET, { 'aircraft.powerplant.tsfc_kg_Ns': c1 * LB_LBFH }), field);
+    expect(at(0.45)).toBeUndefined();
+    expect(at(0.2)).toContain('0.34 lb/(lbf·h) is below');
+  });
+
+  it('thrust lapse exponent: 0.7–1.5, so σ^1.4 (Mattingly high bypass at FL350, M 0.72) passes', () => {
+    // σ(35 000 ft) = 0.309875 and α = 0.19416 (REFERENCES.md): n = ln α / ln σ = 1.399.
+    const density = (n: number) =>
+      plan(JET, {
+        'aircraft.powerplant.thrustLapse': undefined,
+        'aircraft.powerplant.thrustLapseExponent': n,
+      });
+    const field = 'aircraft.powerplant.thrustLapseExponent';
+    expect(warningFor(density(1.4), field)).toBeUndefined();
+    expect(warningFor(density(0.8), field)).toBeUndefined();
+    expect(warningFor(density(1.8), field)).toContain('is above');
+    expect(warningFor(density(0.5), field)).toContain('is below');
   });
 
   it('BSFC in lb/(hp·h): piston 0.40–0.55, turboprop 0.45–0.65 (common practice)', () => {

@@ -20,7 +20,13 @@ function lightJet(): Plan {
     readFileSync(new URL('../../../examples/light-jet.json', import.meta.url), 'utf8'),
   );
   if (!r.ok) throw new Error('light-jet.json does not load');
-  return r.plan;
+  // The Breguet comparison below needs the constant TSFC and the density lapse (version 1's
+  // jet model, still a choice in version 2): T_SL·σ^0.8, TSFC 1.93e-5 kg/(N·s).
+  const pp = r.plan.aircraft.powerplant;
+  if (pp.type !== 'jet') throw new Error('light-jet.json is a jet');
+  const { thrustLapse: _l, tsfcMachFactor: _f, ...rest } = pp;
+  const powerplant = { ...rest, thrustLapseExponent: 0.8, tsfc_kg_Ns: 1.93e-5 };
+  return { ...r.plan, aircraft: { ...r.plan.aircraft, powerplant } };
 }
 
 /** The plan's aircraft and day, starting from its landing state (fuel left, at `h0`). */

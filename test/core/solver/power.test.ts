@@ -29,6 +29,30 @@ import { electricPowerplant, jetPowerplant, propPowerplant, rel } from './fixtur
 const powerplants: [string, Powerplant][] = [
   ['jet with idle', jetPowerplant({ idleFuelFraction: 0.06 })],
   [
+    'jet, high-bypass lapse and Mach TSFC',
+    jetPowerplant({
+      idleFuelFraction: 0.06,
+      thrustLapse: { engineClass: 'highBypass', throttleRatio: 1.05 },
+      tsfcMachFactor: 1.2,
+    }),
+  ],
+  [
+    'jet, turbojet lapse, throttle break at sea-level static',
+    jetPowerplant({ thrustLapse: { engineClass: 'turbojet', throttleRatio: 1 } }),
+  ],
+  [
+    'jet, low-bypass lapse with overridden coefficients',
+    jetPowerplant({
+      thrustLapse: {
+        engineClass: 'lowBypass',
+        throttleRatio: 1.02,
+        machCoefficient: 0.1,
+        breakCoefficient: 3,
+      },
+      tsfcMachFactor: 0.33,
+    }),
+  ],
+  [
     'turbocharged propeller with idle',
     propPowerplant({ idlePowerFraction: 0.1, criticalAltitude_m: 3000 }),
   ],
@@ -82,9 +106,11 @@ describe('power.ts agrees with core/propulsion (same models, validated once)', (
             // Identical formulas; only the order of a product or two may differ (rounding).
             const rho = atm.rho_kg_m3;
             const avail = availableThrustPower_W(pp, atm, Hp, V);
-            expect(rel(availablePower_W(c, max, V, rho), avail)).toBeLessThan(1e-14);
+            expect(rel(availablePower_W(c, { atm, engineMax: max }, V, rho), avail)).toBeLessThan(
+              1e-14,
+            );
             const rate = consumptionRate(pp, P, V, atm, Hp);
-            const mine = consumption(c, max, P, V, rho);
+            const mine = consumption(c, { atm, engineMax: max }, P, V, rho);
             if (rate === 0) expect(mine).toBe(0);
             else expect(rel(mine, rate)).toBeLessThan(1e-13);
           },
