@@ -21,6 +21,19 @@ function bounded(min: number, max: number, unit = '', openMin = false) {
   return (openMin ? number.gt(min, { error }) : number.gte(min, { error })).lte(max, { error });
 }
 
+/**
+ * bounded() for a limit the physics needs, not just a plausible range: the message also
+ * says why, so a refusal explains itself.
+ */
+function boundedBecause(min: number, max: number, unit: string, why: string) {
+  const u = unit ? ` ${unit}` : '';
+  const error = `must be from ${min} to ${max}${u} — ${why}`;
+  return z
+    .number({ error: `must be a finite number${u}` })
+    .gte(min, { error })
+    .lte(max, { error });
+}
+
 const fraction = (min = 0, max = 1, openMin = false) => bounded(min, max, '', openMin);
 const angle_deg = () => bounded(0, 360, 'deg');
 
@@ -34,8 +47,26 @@ export const PolarSchema = z.object({
   CD0: bounded(0.003, 0.3, '', true),
   /** Induced-drag factor k either from Oswald efficiency and aspect ratio (k = 1/(π·e·AR)) or given. */
   induced: z.discriminatedUnion('by', [
-    z.object({ by: z.literal('geometry'), e: fraction(0, 1, true), AR: bounded(1, 60) }),
-    z.object({ by: z.literal('factor'), k: bounded(0.001, 1, '', true) }),
+    z.object({
+      by: z.literal('geometry'),
+      /** Oswald efficiency; real wings about 0.6–0.95 (Raymer, Aircraft Design, ch. 12). */
+      e: boundedBecause(
+        0.3,
+        1,
+        '',
+        'an Oswald efficiency below 0.3 describes no real wing and makes the induced drag k = 1/(π·e·AR) grow without bound',
+      ),
+      AR: bounded(1, 60),
+    }),
+    z.object({
+      by: z.literal('factor'),
+      k: boundedBecause(
+        0.005,
+        1,
+        '',
+        'k = 1/(π·e·AR) is at least 0.0053 for e ≤ 1 and AR ≤ 60; a smaller k means a wing with almost no induced drag',
+      ),
+    }),
   ]),
   /** Lift coefficient of minimum drag (0 for a symmetric polar). */
   CLminD: bounded(-0.5, 1),
@@ -500,7 +531,12 @@ export const DescentLegSchema = z.object({
   mode: z.discriminatedUnion('by', [
     z.object({
       by: z.literal('rate'),
-      rate_m_s: bounded(0, 50, 'm/s', true),
+      rate_m_s: boundedBecause(
+        0.1,
+        50,
+        'm/s',
+        'a slower descent (under 20 ft/min) takes hours per 1000 m and is not a descent the mission can be planned with',
+      ),
       speed: FixedSpeedSchema,
     }),
     /** Power at idle, best-glide speed ((L/D)max). */

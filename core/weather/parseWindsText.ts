@@ -96,6 +96,8 @@ const SEPARATORS = /[\s,;]+/;
 export function parseWindsText(text: string): WindsTextResult {
   const issues: WindsTextIssue[] = [];
   const found: { level: WindLevel; line: number }[] = [];
+  // Altitude → the line that gave it first: the repeat check stays O(1) per line.
+  const firstLine = new Map<number, number>();
   let columns: Column[] | undefined;
   const lines = text.split(/\r\n|\r|\n/);
   for (let i = 0; i < lines.length; i++) {
@@ -112,10 +114,13 @@ export function parseWindsText(text: string): WindsTextResult {
     const r = readLevel(cells, columns, line);
     if (typeof r === 'string') issues.push({ line, message: r });
     else {
-      const twin = found.find((f) => f.level.altitude_m === r.altitude_m);
-      if (twin)
-        issues.push({ line, message: `line ${line}: the altitude repeats line ${twin.line}` });
-      else found.push({ level: r, line });
+      const twin = firstLine.get(r.altitude_m);
+      if (twin !== undefined)
+        issues.push({ line, message: `line ${line}: the altitude repeats line ${twin}` });
+      else {
+        firstLine.set(r.altitude_m, line);
+        found.push({ level: r, line });
+      }
     }
   }
   if (!columns) {

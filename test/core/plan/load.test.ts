@@ -79,12 +79,12 @@ describe('bad plan files are refused with path-named messages', () => {
     expect(hit.message).toBe('aircraft.mass.empty_kg: -3 — must be from 0.01 to 500000 kg');
   });
 
-  it('Oswald efficiency outside (0, 1]', () => {
+  it('Oswald efficiency outside [0.3, 1], with the reason', () => {
     expect(refusedAt('aircraft.polar.induced.e', 0).message).toMatch(
-      /^aircraft\.polar\.induced\.e: 0 — must be above 0 and at most 1$/,
+      /^aircraft\.polar\.induced\.e: 0 — must be from 0\.3 to 1 — an Oswald efficiency below 0\.3 describes no real wing/,
     );
     expect(refusedAt('aircraft.polar.induced.e', 1.2).message).toContain(
-      '1.2 — must be above 0 and at most 1',
+      '1.2 — must be from 0.3 to 1 — ',
     );
   });
 

@@ -10,7 +10,7 @@ import { decodePlanBytes } from '../../../core/plan/decode.ts';
 import { duplicateKey, excerptAt } from '../../../core/plan/jsonError.ts';
 import { parsePlanBytes, parsePlanText } from '../../../core/plan/load.ts';
 import type { LoadResult } from '../../../core/plan/load.ts';
-import { demoText } from './demoPlans.ts';
+import { demoJson, demoText, setAt } from './demoPlans.ts';
 
 const TEXT = demoText('piston-tourer.json');
 const utf8 = (s: string) => new TextEncoder().encode(s);
@@ -115,5 +115,42 @@ describe('syntax messages quote a short excerpt, never raw newlines', () => {
     expect(m).toContain('\\u0001');
     expect(excerptAt('x\r\ny', 0)).toBe('x');
     expect(excerptAt('a'.repeat(100), 50)).toBe(`…${'a'.repeat(32)}…`);
+  });
+});
+
+describe('bounds the physics needs, with the reason in the message', () => {
+  // Each value used to pass the schema and break the solver (an infinite induced-drag
+  // factor, a mass that became NaN); k = 1/(π·e·AR) is the definition of the induced-drag
+  // factor (Anderson, Introduction to Flight, ch. 6), 20 ft/min = 0.1016 m/s (exact ft).
+  const refused = (path: string, value: unknown) => {
+    const data = demoJson('piston-tourer.json');
+    setAt(data, path, value);
+    return messages(parsePlanText(JSON.stringify(data)));
+  };
+
+  it('Oswald efficiency 5e-324', () => {
+    expect(refused('aircraft.polar.induced.e', 5e-324)).toEqual([
+      'aircraft.polar.induced.e: 5e-324 — must be from 0.3 to 1 — an Oswald efficiency below 0.3 describes no real wing and makes the induced drag k = 1/(π·e·AR) grow without bound',
+    ]);
+  });
+
+  it('an induced-drag factor below what e ≤ 1 and AR ≤ 60 allow', () => {
+    expect(refused('aircraft.polar.induced', { by: 'factor', k: 1e-6 })).toEqual([
+      'aircraft.polar.induced.k: 0.000001 — must be from 0.005 to 1 — k = 1/(π·e·AR) is at least 0.0053 for e ≤ 1 and AR ≤ 60; a smaller k means a wing with almost no induced drag',
+    ]);
+    // 1/(π·1·60) = 0.00530…: the lowest k the geometry form can give is accepted as a factor.
+    const data = demoJson('piston-tourer.json');
+    setAt(data, 'aircraft.polar.induced', { by: 'factor', k: 1 / (Math.PI * 60) });
+    expect(parsePlanText(JSON.stringify(data)).ok).toBe(true);
+  });
+
+  it('a descent rate of 1e-300 m/s', () => {
+    const data = demoJson('piston-tourer.json');
+    const legs = data.legs as { kind: string; mode?: { by: string } }[];
+    const i = legs.findIndex((l) => l.kind === 'descent' && l.mode?.by === 'rate');
+    expect(i).toBeGreaterThan(0);
+    expect(refused(`legs.${i}.mode.rate_m_s`, 1e-300)).toEqual([
+      `legs.${i}.mode.rate_m_s: 1e-300 — must be from 0.1 to 50 m/s — a slower descent (under 20 ft/min) takes hours per 1000 m and is not a descent the mission can be planned with`,
+    ]);
   });
 });
