@@ -144,7 +144,7 @@ function runSolve(path: string, opts: OutputOptions, io: CliIo): number {
   else if (opts.csv) io.stdout(renderSolveCsv(result, opts.units));
   else {
     const route = renderRouteText(plan, result, opts.units);
-    const monteCarlo = mc ? renderMonteCarloText(mc, opts.units) : '';
+    const monteCarlo = mc ? renderMonteCarloText(mc, opts.units, plan) : '';
     const extra = [route, monteCarlo].filter((t) => t !== '').join('\n');
     io.stdout(renderSolveText(plan, result, warnings, opts.units, extra));
   }

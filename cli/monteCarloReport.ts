@@ -1,17 +1,18 @@
 /**
  * `legwise solve --monte-carlo`: the reserve Monte Carlo (core/uncertainty) after the solve —
  * percentiles of the landing margin over the reserve, how often the reserve is kept in plain
- * words, and the inputs that matter most. Spreads, samples and random seed come from the
+ * words, the failed flights counted by leg and cause, and the inputs that matter most. Spreads, samples and random seed come from the
  * plan's `uncertainty` block, or the defaults of core/uncertainty/spreads.ts.
  */
 import { formatQuantity } from '../core/format.ts';
+import { failureSentence } from '../core/uncertainty/failureCauses.ts';
 import type { Plan } from '../core/plan/schema.ts';
 import {
   createReserveRun,
   type ReserveMonteCarloResult,
 } from '../core/uncertainty/reserveMonteCarlo.ts';
 import { monteCarloSetup } from '../core/uncertainty/spreads.ts';
-import type { UnitSystemId } from '../core/units.ts';
+import type { Quantity, UnitSystemId } from '../core/units.ts';
 
 /** Samples solved between two progress reports. */
 const STEP = 50;
@@ -37,17 +38,36 @@ export function keptSentence(mc: ReserveMonteCarloResult): string {
   return `In ${n} of 100 simulated flights the reserve is kept.`;
 }
 
-export function renderMonteCarloText(mc: ReserveMonteCarloResult, units: UnitSystemId): string {
+/** Failure causes listed; the rest are summed in one line. */
+const CAUSES_SHOWN = 5;
+
+export function renderMonteCarloText(
+  mc: ReserveMonteCarloResult,
+  units: UnitSystemId,
+  plan: Plan,
+): string {
   const q = mc.consumable === 'fuel' ? 'fuelMass' : 'energy';
   const f = (v: number) => formatQuantity(v, q, units);
   const lines = [
     `Reserve Monte Carlo: ${mc.samples} simulated flights (random seed ${mc.seed})`,
     `  ${keptSentence(mc)}`,
+    `  Wind errors of the legs of one flight correlated ${String(Number(mc.windCorrelation.toFixed(2)))} (${plan.uncertainty?.windCorrelation === undefined ? 'default, common practice' : 'set in the plan'}).`,
   ];
   if (mc.failedFraction > 0) {
     const failed = Math.round(mc.failedFraction * mc.samples);
     lines.push(
-      `  ${failed} of the ${mc.samples} simulated flights ${failed === 1 ? 'has' : 'have'} a leg that cannot be flown.`,
+      `  ${failed} of the ${mc.samples} simulated flights ${failed === 1 ? 'has' : 'have'} a leg that cannot be flown:`,
+    );
+    const speed = (v: number, quantity: Quantity) => formatQuantity(v, quantity, units);
+    for (const cause of mc.failures.slice(0, CAUSES_SHOWN)) {
+      lines.push(`    ${failureSentence(cause, mc.samples, plan, mc.consumable, speed)}`);
+    }
+    const rest = mc.failures.slice(CAUSES_SHOWN).reduce((n, c) => n + c.count, 0);
+    if (rest > 0) lines.push(`    ${rest} more for other legs or causes.`);
+  }
+  if (mc.reserveShortCount > 0) {
+    lines.push(
+      `  ${mc.reserveShortCount} of the ${mc.samples} simulated flights complete the mission but land with less than the reserve.`,
     );
   }
   const d = mc.margin;

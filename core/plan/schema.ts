@@ -428,6 +428,11 @@ export const UncertaintySchema = z.object({
   fuelConsumption: fraction(0, 0.3),
   batteryCapacity: fraction(0, 0.5),
   payload_kg: bounded(0, 10_000, 'kg'),
+  /**
+   * Correlation of the wind errors of two legs of one flight (0 independent, 1 the same
+   * error on every leg); 0.8 if absent (common practice, core/uncertainty/windErrors.ts).
+   */
+  windCorrelation: fraction(0, 1).optional(),
   samples: z.number().int().min(100).max(20_000),
   seed: z
     .number()

@@ -7,7 +7,8 @@
  * the landing margin = amount left on landing − reserve required (kg of fuel, or J of usable
  * battery energy), plus what is on board at the start and at the end of every leg the
  * nominal plan flies (a p5–p95 band for the profile chart). A sample whose plan fails counts
- * as a reserve not kept, as does one the solver reports as not keeping it (`reserve.kept`).
+ * as a reserve not kept, as does one the solver reports as not keeping it (`reserve.kept`);
+ * failed samples are also counted by the leg that failed and why (failureCauses.ts).
  * Percentiles and the mean are over the completed samples (Hyndman–Fan definition 7,
  * stats.ts); the probability of not keeping the reserve is over all samples. Input importance
  * is Spearman's rank correlation between each drawn input and the margin, failed samples
@@ -18,8 +19,10 @@ import { InputError, requireFinite } from '../errors.ts';
 import type { Plan } from '../plan/schema.ts';
 import { solvePlan, type SolveTolerance } from '../solver/solve.ts';
 import type { Consumable, PlanResult } from '../solver/types.ts';
+import { failureTally, type FailureCause } from './failureCauses.ts';
 import { normalSource } from './random.ts';
 import { checkSpreads, perturbPlan, type ReserveSpreads } from './spreads.ts';
+import { DEFAULT_WIND_CORRELATION } from './windErrors.ts';
 import { mean, percentileSorted, spearman } from './stats.ts';
 
 export interface MonteCarloOptions {
@@ -99,6 +102,12 @@ export interface ReserveRunResult {
   margin: Distribution | null;
   probabilityReserveNotKept: number;
   failedFraction: number;
+  /** The failed flights counted by the leg that failed and why, most frequent first. */
+  failures: FailureCause[];
+  /** Completed flights that landed with less than the reserve. */
+  reserveShortCount: number;
+  /** The correlation of the legs' wind errors the run used (windErrors.ts). */
+  windCorrelation: number;
   importance: InputImportance[];
   /** The start of the mission, then the end of every leg the nominal plan flies. */
   band: BandPoint[];
@@ -139,6 +148,8 @@ export function createReserveRun(
   const inputs = new Map<string, number[]>();
   let notKept = 0;
   let failed = 0;
+  let short = 0;
+  const tally = failureTally();
   let done = 0;
 
   function solveOne(): void {
@@ -157,6 +168,7 @@ export function createReserveRun(
     });
     completed.push(r.completed);
     if (!r.completed) {
+      tally.add(perturbed, r);
       failed++;
       notKept++;
       margins.push(0);
@@ -164,7 +176,10 @@ export function createReserveRun(
     }
     margins.push(marginOf(r));
     remaining.push(r.landing.remaining);
-    if (!r.reserve.kept) notKept++;
+    if (!r.reserve.kept) {
+      notKept++;
+      short++;
+    }
   }
 
   function result(): ReserveRunResult {
@@ -206,6 +221,9 @@ export function createReserveRun(
       margin: distribution(finished),
       probabilityReserveNotKept: notKept / n,
       failedFraction: failed / n,
+      failures: tally.list(),
+      reserveShortCount: short,
+      windCorrelation: spreads.windCorrelation ?? DEFAULT_WIND_CORRELATION,
       importance,
       band,
     };

@@ -3,13 +3,17 @@
  * random draw turns a plan into a perturbed copy.
  *
  * Each input is normal around the plan's value: wind speed and direction per leg, and per
- * level of the winds-aloft table when the plan has one (the same spreads), in absolute terms, CD0, propeller/drivetrain efficiency, TSFC/BSFC and battery capacity relative to the
+ * level of the winds-aloft table when the plan has one (the same spreads), in absolute terms; CD0, propeller/drivetrain efficiency, TSFC/BSFC and battery capacity relative to the
  * plan's value, payload in kg. A draw that falls outside the plan schema's range (negative wind
  * or payload, efficiency above its bound, ...) is censored at the bound, so the perturbed plan
  * is still a valid plan; the wind direction wraps round the compass.
  *
+ * The wind errors of the legs of one flight are correlated (windErrors.ts): one shared
+ * error per flight plus each leg's own, with the plan's correlation.
+ *
  * Defaults are common practice for a pre-flight estimate (from memory, not a published
- * standard): forecast wind error about 5 kt and 15° per leg; CD0 known to 5 %; propeller or
+ * standard): forecast wind error about 5 kt and 15° per leg, correlated 0.8 between the
+ * legs of a flight; CD0 known to 5 %; propeller or
  * drivetrain efficiency to 3 %; specific fuel consumption to 3 %; battery capacity to 5 %
  * (state of health); take-off loading to 1 % of MTOW.
  */
@@ -18,6 +22,13 @@ import { requireFinite } from '../errors.ts';
 import type { Leg, Plan, Powerplant } from '../plan/schema.ts';
 import { KT } from '../units.ts';
 import type { NormalSource } from './random.ts';
+import {
+  checkWindCorrelation,
+  DEFAULT_WIND_CORRELATION,
+  drawSharedWindError,
+  legWindError,
+  type SharedWindError,
+} from './windErrors.ts';
 
 export interface ReserveSpreads {
   /** σ of each leg's wind speed, m/s. */
@@ -34,6 +45,11 @@ export interface ReserveSpreads {
   batteryCapacity: number;
   /** σ of the payload mass, kg. */
   payload_kg: number;
+  /**
+   * Correlation of the wind errors of two legs (and winds-aloft levels) of one flight, 0–1;
+   * DEFAULT_WIND_CORRELATION if omitted (windErrors.ts).
+   */
+  windCorrelation?: number;
 }
 
 export function checkSpreads(s: ReserveSpreads, field = 'spreads'): ReserveSpreads {
@@ -44,6 +60,9 @@ export function checkSpreads(s: ReserveSpreads, field = 'spreads'): ReserveSprea
   requireFinite(`${field}.fuelConsumption`, s.fuelConsumption, 0, 0.5);
   requireFinite(`${field}.batteryCapacity`, s.batteryCapacity, 0, 0.5);
   requireFinite(`${field}.payload_kg`, s.payload_kg, 0, 100_000, 'kg');
+  if (s.windCorrelation !== undefined) {
+    checkWindCorrelation(s.windCorrelation, `${field}.windCorrelation`);
+  }
   return s;
 }
 
@@ -58,6 +77,7 @@ export function spreadsFromDefaults(plan: Plan): ReserveSpreads {
     fuelConsumption: pp.type === 'electric' ? 0 : 0.03,
     batteryCapacity: pp.type === 'electric' ? 0.05 : 0,
     payload_kg: 0.01 * plan.aircraft.mass.mtow_kg,
+    windCorrelation: DEFAULT_WIND_CORRELATION,
   };
 }
 
@@ -109,25 +129,31 @@ function wrapDegrees(d: number): number {
 }
 
 /**
- * Number of normal deviates one sample uses: two per leg (speed, direction; drawn for every
- * leg so the stream stays aligned between plans with the same legs), five for the aircraft,
- * then two per level of the winds-aloft table (after the others, so a plan without a table
- * draws exactly what it drew before tables were perturbed).
+ * Number of normal deviates one sample uses: two for the flight's shared wind error (speed,
+ * direction), two per leg (its own; drawn for every leg so the stream stays aligned between
+ * plans with the same legs), five for the aircraft, then two per level of the winds-aloft
+ * table.
  */
 export function drawsPerSample(plan: Plan): number {
-  return 2 * plan.legs.length + 5 + 2 * (plan.environment.windsAloft?.length ?? 0);
+  return 2 + 2 * plan.legs.length + 5 + 2 * (plan.environment.windsAloft?.length ?? 0);
 }
 
 /** Schema bound of a winds-aloft level's speed (core/plan/schema.ts). */
 const ALOFT_SPEED_MAX_M_S = 150;
 
 /** The winds-aloft table with each level's speed and direction drawn (same spreads as legs). */
-function perturbAloft(plan: Plan, s: ReserveSpreads, rng: NormalSource, draws: Draw[]): Plan {
+function perturbAloft(
+  plan: Plan,
+  s: ReserveSpreads,
+  rng: NormalSource,
+  shared: SharedWindError,
+  draws: Draw[],
+): Plan {
   const levels = plan.environment.windsAloft;
   if (levels === undefined) return plan;
   const windsAloft = levels.map((level, j) => {
-    const zSpeed = rng.normal();
-    const zDir = rng.normal();
+    const zSpeed = legWindError(rng.normal(), shared.speed, shared);
+    const zDir = legWindError(rng.normal(), shared.direction, shared);
     const out = { ...level };
     if (s.windSpeed_m_s > 0) {
       out.speed_m_s = censor(level.speed_m_s + s.windSpeed_m_s * zSpeed, 0, ALOFT_SPEED_MAX_M_S);
@@ -154,9 +180,10 @@ export function perturbPlan(
   // Legs and fields that follow the mission wind get its drawn value through their own.
   const plan = withMissionWind(asGiven);
   const draws: Draw[] = [];
+  const shared = drawSharedWindError(rng, s.windCorrelation ?? DEFAULT_WIND_CORRELATION);
   const legs = plan.legs.map((leg, i): Leg => {
-    const zSpeed = rng.normal();
-    const zDir = rng.normal();
+    const zSpeed = legWindError(rng.normal(), shared.speed, shared);
+    const zDir = legWindError(rng.normal(), shared.direction, shared);
     if (!('wind' in leg)) return leg;
     const wind = { ...leg.wind };
     if (s.windSpeed_m_s > 0) {
@@ -192,7 +219,7 @@ export function perturbPlan(
     draws.push({ path: 'aircraft.mass.payload_kg', value: mass.payload_kg });
   }
   const powerplant = perturbPowerplant(ac.powerplant, s, { zEff, zSfc, zBatt }, draws);
-  const perturbed = perturbAloft(plan, s, rng, draws);
+  const perturbed = perturbAloft(plan, s, rng, shared, draws);
   return { plan: { ...perturbed, aircraft: { ...ac, polar, mass, powerplant }, legs }, draws };
 }
 

@@ -291,6 +291,43 @@ describe('legwise solve --monte-carlo', () => {
     expect(json.monteCarlo.probabilityReserveNotKept).toBe(mc.probabilityReserveNotKept);
   });
 
+  it('states the wind-error correlation it used (the default, common practice)', () => {
+    const { out } = run(['solve', 'mc.json', '--monte-carlo'], files);
+    expect(mc.windCorrelation).toBe(0.8);
+    expect(out).toContain(
+      'Wind errors of the legs of one flight correlated 0.8 (default, common practice).',
+    );
+  });
+
+  it('counts the failed flights by leg and cause, in words', () => {
+    // The survey loiter (19 m/s TAS) in a 17 m/s wind with σ 3 m/s: some flights cannot hold
+    // station; the CLI must say so with core's counts (core/uncertainty/failureCauses.ts).
+    const windy = demoJson('survey-uav-electric.json');
+    setAt(windy, 'uncertainty', { ...uncertainty, windCorrelation: 0.5 });
+    setAt(windy, 'legs.3.wind.speed_m_s', 17);
+    const text = JSON.stringify(windy);
+    const parsed = parsePlanText(text);
+    if (!parsed.ok) throw new Error('windy plan');
+    const core = reserveMonteCarlo(
+      parsed.plan,
+      { ...spreads, windCorrelation: 0.5 },
+      { samples, seed },
+    );
+    const station = core.failures.find((f) => f.legIndex === 3 && f.cause === 'station');
+    expect(station?.count).toBeGreaterThan(0);
+    const { out } = run(['solve', 'windy.json', '--monte-carlo'], { 'windy.json': text });
+    expect(out).toContain('correlated 0.5 (set in the plan)');
+    const failed = Math.round(core.failedFraction * samples);
+    expect(out).toContain(
+      `${failed} of the ${samples} simulated flights have a leg that cannot be flown:`,
+    );
+    expect(out).toMatch(
+      new RegExp(
+        `In ${station!.count} of ${samples} simulated flights leg 4 “Survey lines” \\(loiter\\) could not hold station in a wind of [0-9.]+ m/s – [0-9.]+ m/s\\.`,
+      ),
+    );
+  });
+
   it('is refused with --csv and outside solve', () => {
     expect(run(['solve', 'mc.json', '--monte-carlo', '--csv'], files).code).toBe(2);
     expect(run(['tune', 'mc.json', '--monte-carlo'], files).code).toBe(2);
