@@ -17,6 +17,9 @@ export interface PolarCoefficients {
   k: number;
   CLminD: number;
   CLmax: number;
+  /** Drag rise near the stall: ΔCD = riseK·(CL − riseCL)² above riseCL (absent: none). */
+  riseCL?: number;
+  riseK?: number;
 }
 
 /** An optimum point of the polar: the CL, its CD and the value of the maximised ratio. */
@@ -36,12 +39,41 @@ export function inducedDragFactor(polar: Polar): number {
 }
 
 export function polarCoefficients(polar: Polar): PolarCoefficients {
-  return checkCoefficients({
+  const c: PolarCoefficients = {
     CD0: polar.CD0,
     k: inducedDragFactor(polar),
     CLminD: polar.CLminD,
     CLmax: polar.CLmax,
-  });
+  };
+  const rise = polar.stallDragRise;
+  if (rise !== undefined && rise.atCLmax > 0) {
+    const onset = requireFinite(
+      'polar.stallDragRise.onsetCL',
+      rise.onsetCL,
+      Math.max(polar.CLminD, 0),
+      Infinity,
+    );
+    if (!(onset < polar.CLmax)) {
+      throw new InputError('polar.stallDragRise.onsetCL', onset, `below CLmax (${polar.CLmax})`);
+    }
+    const span = polar.CLmax - onset;
+    c.riseCL = onset;
+    c.riseK = requireFinite('polar.stallDragRise.atCLmax', rise.atCLmax, 0, 1) / (span * span);
+  }
+  return checkCoefficients(c);
+}
+
+/**
+ * The drag rise near the stall (0 below its onset). Form: a quadratic onset, smooth (C¹) at
+ * CL_onset, reaching the given ΔCD at CLmax — our own simple form for the separation that
+ * the parabola leaves out (from memory: measured polars of light aircraft and UAVs bend away
+ * from the parabola over the last 15–25 % of CL before CLmax).
+ */
+export function stallDragRise(c: PolarCoefficients, CL: number): number {
+  const r = c.riseCL;
+  if (r === undefined || !(CL > r)) return 0;
+  const d = CL - r;
+  return (c.riseK ?? 0) * d * d;
 }
 
 function checkCoefficients(c: PolarCoefficients): PolarCoefficients {
@@ -59,7 +91,7 @@ function checkCL(CL: number, field = 'CL'): number {
 export function dragCoefficient(c: PolarCoefficients, CL: number): number {
   checkCoefficients(c);
   const d = checkCL(CL) - c.CLminD;
-  return c.CD0 + c.k * d * d;
+  return c.CD0 + c.k * d * d + stallDragRise(c, CL);
 }
 
 export function liftToDrag(c: PolarCoefficients, CL: number): number {

@@ -72,6 +72,12 @@ export const PolarSchema = z.object({
   CLminD: bounded(-0.5, 1),
   CLmax: bounded(0.3, 4),
   CLmaxFlaps: bounded(0.3, 5).optional(),
+  /**
+   * Drag rise approaching the stall (core/polar.ts): above onsetCL the parabola gets
+   * ΔCD = atCLmax·((CL − onsetCL)/(CLmax − onsetCL))²; onsetCL must be below CLmax.
+   * Absent: the parabola holds up to CLmax.
+   */
+  stallDragRise: z.object({ onsetCL: bounded(0.1, 4), atCLmax: bounded(0, 1) }).optional(),
 });
 
 export const FuelKindSchema = z.enum(['avgas', 'mogas', 'jetA', 'jetA1', 'diesel']);

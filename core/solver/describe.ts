@@ -189,6 +189,8 @@ export function describeCheck(check: Check, system: UnitSystemId): string {
     }
     case 'launch':
       return `Release airspeed ${value} × stall speed against ${limit}.`;
+    case 'oneEngineOut':
+      return `Estimate, one engine inoperative: service ceiling ${value} against the mission's highest altitude ${limit}.`;
     default:
       return check.detail;
   }

@@ -20,6 +20,8 @@
  */
 import type { PolarCoefficients } from '../polar.ts';
 import type { PowerConstants } from './power.ts';
+import { maximizeBounded } from './optimize1d.ts';
+import { dragCoefficientOf } from './speeds.ts';
 
 /** The CL maximising CL^m/CD, 0 < m < 2 (root taken without cancellation). */
 export function clMaximizing(c: PolarCoefficients, m: number): number {
@@ -39,7 +41,36 @@ export interface OptimumCL {
   glide: number;
 }
 
+/**
+ * With a stall drag rise (core/polar.ts) the parabola's optimum holds when it lies below the
+ * onset (the rise only lowers CL^m/CD above it); otherwise the optimum lies between the onset
+ * and the parabola's optimum (above that, both factors fall) and is searched there.
+ */
+function optimumWithRise(c: PolarCoefficients, m: number): number {
+  const CL = clMaximizing(c, m);
+  const r = c.riseCL;
+  if (r === undefined || !(CL > r)) return CL;
+  return maximizeBounded((x) => Math.pow(x, m) / dragCoefficientOf(c, x), r, CL).x;
+}
+
 export function optimumCL(c: PolarCoefficients, power: PowerConstants): OptimumCL {
+  if (c.riseCL !== undefined) {
+    const glide = optimumWithRise(c, 1);
+    switch (power.type) {
+      case 'jet':
+        return { range: optimumWithRise(c, 0.5), endurance: glide, glide };
+      case 'propeller':
+        return { range: glide, endurance: optimumWithRise(c, 1.5), glide };
+      case 'electric': {
+        const n = power.peukertExponent;
+        return {
+          range: optimumWithRise(c, (3 * n - 1) / (2 * n)),
+          endurance: optimumWithRise(c, 1.5),
+          glide,
+        };
+      }
+    }
+  }
   const glide = clMaximizing(c, 1);
   switch (power.type) {
     case 'jet':

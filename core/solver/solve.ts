@@ -12,8 +12,9 @@
  */
 import { InputError } from '../errors.ts';
 import type { Leg, LoiterLeg, Plan } from '../plan/schema.ts';
-import { missionChecks, verdictOf } from './checks.ts';
+import { missionChecks, verdictOf, type CheckInput } from './checks.ts';
 import { fieldChecks } from './fieldChecks.ts';
+import { oneEngineOutCheck } from './oneEngineOut.ts';
 import { crashedResult } from './crashed.ts';
 import { guardResult } from './guard.ts';
 import { baseResult, legName, refusedLeg, type LegContext } from './legs/common.ts';
@@ -240,7 +241,11 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
       requiredTime_s,
       remainingTime_s,
     },
-    [...shapeChecks(plan, flown.outcomes, completed, end.h_m), ...field.inputs],
+    [
+      ...shapeChecks(plan, flown.outcomes, completed, end.h_m),
+      ...field.inputs,
+      ...oneEngineOutInputs(model, plan, flown.outcomes, warnings),
+    ],
   );
   const fuel = model.consumable === 'fuel';
   const startAmount = model.consumableStart;
@@ -281,4 +286,22 @@ function solveMission(plan: Plan, samples: number, tolerance: SolveTolerance): P
     verdict: verdictOf(checks, !completed),
     warnings,
   };
+}
+
+/** The one-engine-out estimate of a multi-engine aircraft (oneEngineOut.ts), or a warning. */
+function oneEngineOutInputs(
+  model: FlightModel,
+  plan: Plan,
+  outcomes: readonly LegOutcome[],
+  warnings: string[],
+): CheckInput[] {
+  try {
+    const c = oneEngineOutCheck(model, plan, outcomes);
+    return c === null ? [] : [c];
+  } catch (e) {
+    warnings.push(
+      `One-engine-inoperative estimate not computed: ${e instanceof Error ? e.message : String(e)}`,
+    );
+    return [];
+  }
 }

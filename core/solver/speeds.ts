@@ -47,9 +47,14 @@ export interface SpeedChoice {
   optimumAt?: 'lo' | 'hi' | null;
 }
 
-/** CD = CD0 + k·(CL − CLminD)² without re-validating the coefficients (core/polar.ts). */
+/** CD = CD0 + k·(CL − CLminD)² (+ the stall drag rise) without re-validating (core/polar.ts). */
 export function dragCoefficientOf(c: PolarCoefficients, CL: number): number {
   const d = CL - c.CLminD;
+  const r = c.riseCL;
+  if (r !== undefined && CL > r) {
+    const e = CL - r;
+    return c.CD0 + c.k * d * d + (c.riseK ?? 0) * e * e;
+  }
   return c.CD0 + c.k * d * d;
 }
 

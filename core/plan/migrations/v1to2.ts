@@ -9,6 +9,7 @@ import type { RawPlan } from '../migrate.ts';
 import { finalReserveAtCruise } from './finalReserveAtCruise.ts';
 import { propellerCurvePart } from './propellerCurve.ts';
 import { jetMachLapse } from './jetMachLapse.ts';
+import { stallDragRisePart } from './stallDragRise.ts';
 
 /** One part of the step: returns the lifted plan and pushes a note per change it made. */
 export type MigrationPart = (raw: RawPlan, notes: string[]) => RawPlan;
@@ -16,6 +17,7 @@ export type MigrationPart = (raw: RawPlan, notes: string[]) => RawPlan;
 /** The parts of the 1 → 2 step, in the order they run. */
 export const V1_TO_V2_PARTS: readonly MigrationPart[] = [
   propellerCurvePart,
+  stallDragRisePart,
   finalReserveAtCruise,
   jetMachLapse,
 ];

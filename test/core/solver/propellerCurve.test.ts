@@ -165,6 +165,31 @@ describe('version-1 plans migrate to the momentum propeller (test/fixtures/plans
   }
 });
 
+describe('version-1 plans get the stall drag rise (core/plan/migrations/stallDragRise.ts)', () => {
+  for (const name of [
+    'light-jet',
+    'piston-tourer',
+    'route-survey',
+    'survey-uav-electric',
+    'twelve-legs',
+  ]) {
+    it(`${name}: onset 0.8·CLmax, ΔCD = CD0 at CLmax, with a note`, () => {
+      const text = readFileSync(
+        new URL(`../../fixtures/plans-v1/${name}.json`, import.meta.url),
+        'utf8',
+      );
+      const old = JSON.parse(text) as { aircraft: { polar: { CLmax: number; CD0: number } } };
+      const r = parsePlanText(text);
+      expect(r.ok).toBe(true);
+      if (!r.ok) return;
+      expect(r.changes.some((c) => /drag polar now rises above the parabola/.test(c))).toBe(true);
+      const rise = r.plan.aircraft.polar.stallDragRise!;
+      expect(rel(rise.onsetCL, 0.8 * old.aircraft.polar.CLmax)).toBeLessThan(5e-3); // 3 digits
+      expect(rise.atCLmax).toBe(old.aircraft.polar.CD0);
+    });
+  }
+});
+
 describe('one propeller for take-off and climb', () => {
   it('the take-off thrust at rest is the momentum static thrust with FM = the profile factor', () => {
     const plan = loaded('../../../examples/piston-tourer.json');
