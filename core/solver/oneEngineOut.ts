@@ -62,11 +62,15 @@ export function oeiBestClimb(
   const W = mass_kg * G0;
   const S = model.S_m2;
   const c = remainingEngines(model.power, engines);
-  const max = (amb.engineMax * (engines - 1)) / engines;
+  const share = (engines - 1) / engines;
+  // A jet: the share of the thrust its lapse gives; a propeller: the share of the shaft power
+  // through the remaining disks.
+  const air = c.type === 'jet' ? amb : { atm: amb.atm, engineMax: share * amb.engineMax };
+  const scale = c.type === 'jet' ? share : 1;
   const excess = (V: number) => {
     const q = 0.5 * rho * V * V;
     const CD = dragCoefficientOf(model.polar, W / (q * S)) + dragIncrement;
-    return (availablePower_W(c, max, V, rho) - q * S * CD * V) / W;
+    return (scale * availablePower_W(c, air, V, rho) - q * S * CD * V) / W;
   };
   const Vs = Math.sqrt((2 * W) / (rho * S * model.polar.CLmax));
   const lo = model.settings.stallFactor * Vs;
