@@ -86,4 +86,23 @@ describe.runIf(haveChromium || !!process.env.CI)('plan notes in the planner', ()
     await expect.poll(() => panel.isVisible()).toBe(false);
     expect(pageErrors).toEqual([]);
   });
+
+  it('night theme: follows the system preference, and the Night button sets it', async () => {
+    const theme = () => page.evaluate(() => document.documentElement.dataset.theme);
+    const background = () => page.evaluate(() => getComputedStyle(document.body).backgroundColor);
+    expect(await theme()).toBe('normal');
+    await page.emulateMedia({ colorScheme: 'dark' });
+    await expect.poll(theme).toBe('night');
+    // rgb(14, 12, 10) is --bg of the night theme (base.css).
+    await expect.poll(background).toBe('rgb(14, 12, 10)');
+    await page.emulateMedia({ colorScheme: 'light' });
+    await expect.poll(theme).toBe('normal');
+    await page.click(byTestId('night-toggle'));
+    await expect.poll(theme).toBe('night');
+    expect(await page.getAttribute(byTestId('night-toggle'), 'aria-pressed')).toBe('true');
+    await page.screenshot({ path: 'artifacts/screenshots/planner-night.png' });
+    await page.click(byTestId('night-toggle'));
+    await expect.poll(theme).toBe('normal');
+    expect(pageErrors).toEqual([]);
+  });
 });

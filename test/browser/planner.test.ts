@@ -251,7 +251,8 @@ describe.runIf(haveChromium || !!process.env.CI)('planner page in headless Chrom
       page.waitForEvent('download'),
       page.click(byTestId('file-save')),
     ]);
-    expect(saved.suggestedFilename()).toMatch(/\.legwise\.json$/);
+    // Plans carry our own extension (.legwise), as the desktop app's file association.
+    expect(saved.suggestedFilename()).toMatch(/\.legwise$/);
     const loaded = parsePlanText(readFileSync(await saved.path(), 'utf8'));
     expect(loaded.ok).toBe(true);
     if (loaded.ok) expect(loaded.plan.legs.map((l) => l.id)).toEqual(await legIds(page));

@@ -40,11 +40,23 @@ export const CONTRAST_COLORS: ChartColors = {
   width: 3,
 };
 
+/** Night: warm and dim, no blue above red or green (see the night theme in base.css). */
+export const NIGHT_COLORS: ChartColors = {
+  text: '#d9c7ad',
+  grid: '#3a322a',
+  line: '#e0a04a',
+  line2: '#9cc27a',
+  points: '#e8d6b8',
+  mark: '#a8977f',
+  fail: '#f08a6c',
+  width: 2,
+};
+
 const MARK_COLORS = ['#7c3aed', '#0f766e', '#9d174d', '#4b5563'];
 
 function colorOf(role: SeriesRole, colors: ChartColors, markIndex: number): string {
   if (role === 'mark')
-    return colors === CONTRAST_COLORS
+    return colors === CONTRAST_COLORS || colors === NIGHT_COLORS
       ? colors.mark
       : (MARK_COLORS[markIndex % MARK_COLORS.length] ?? colors.mark);
   return colors[
