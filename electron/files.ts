@@ -10,7 +10,7 @@ import { existsSync, promises as fsp } from 'node:fs';
 import path from 'node:path';
 import { z } from 'zod';
 import type { Plan } from '../core/plan/schema.ts';
-import { parsePlan, parsePlanText, serializePlan } from '../core/plan/load.ts';
+import { parsePlan, parsePlanBytes, serializePlan } from '../core/plan/load.ts';
 import { failure, type Failure, type RecoveredPlan } from './contract.ts';
 import {
   MAX_BACKUP_GENERATIONS,
@@ -59,7 +59,7 @@ export type ReadPlanResult =
  */
 export async function readPlanFile(filePath: string): Promise<ReadPlanResult> {
   const name = path.basename(filePath);
-  let text: string;
+  let bytes: Uint8Array;
   let stamp: FileStamp;
   try {
     const stat = await fsp.stat(filePath);
@@ -72,12 +72,14 @@ export async function readPlanFile(filePath: string): Promise<ReadPlanResult> {
       );
     }
     const read = await readWithStamp(filePath);
-    text = read.bytes.toString('utf8');
+    bytes = read.bytes;
     stamp = read.stamp;
   } catch (error) {
     return failure('READ_FAILED', `Could not open ${name}: ${describeFsError(error)}.`);
   }
-  const loaded = parsePlanText(text);
+  // Strict decoding: UTF-16 or bytes that are not UTF-8 are refused by name, never turned
+  // into U+FFFD (core/plan/decode.ts).
+  const loaded = parsePlanBytes(bytes);
   if (loaded.ok)
     return {
       ok: true,

@@ -1,21 +1,23 @@
 /**
  * `npm run bench`: the speed bars of DESIGN.md section 6, measured in one run.
- *  1. Median and p90 solve time of the 12-leg example plan (target ≤ 2 ms median).
+ *  1. Median and p90 solve time of the 12-leg example plan (target ≤ 0.3 ms median).
  *  2. A 100 × 60 speed × altitude map of one cruise leg with full leg integration
- *     (target ≤ 150 ms).
+ *     (target ≤ 25 ms).
  *  3. Cost of the integrator against the closed form it must reproduce: one jet cruise-climb
  *     leg flown by the solver vs Breguet's cruise-climb range (Anderson, Introduction to
  *     Flight, ch. 6), with their agreement and the ODE steps per leg.
  *  4. Optimizer times on the same plan.
  *  5. Every example plan solved with the default ('precise') and the 'fast' tolerance, so a
  *     powerplant whose solve is out of line shows up (median per solve).
- *  6. The reserve Monte Carlo: 2000 samples of the 12-leg plan (target ≤ 1 s).
+ *  6. The reserve Monte Carlo: 10 000 samples of the 12-leg plan (target ≤ 1.5 s).
  *  7. CLI batch mode: `legwise solve FILE...` in one process over 1000 copies of the 12-leg
  *     plan file — read, strict decode, validate, solve, one NDJSON row each (target ≥ 500
  *     plans/s on one core).
  *  8. GPX import of a 190 000-point logger track (elevation and time on every point) in a
  *     child process under an 80 MB heap limit (targets ≤ 0.3 s, ≤ 80 MB).
- * Timings use performance.now(); they depend on the machine and are printed, never asserted.
+ * Sections 1, 2, 6, 7 and 8 also print the ratio to the previous implementation's figures
+ * (bench-previous.json). Timings use performance.now(); they depend on the machine and are
+ * printed, never asserted.
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -43,10 +45,25 @@ import { spreadsFromDefaults } from '../core/uncertainty/spreads.ts';
 import { G0 } from '../core/units.ts';
 import { loggerTrackGpx } from '../test/support/gpxSynth.ts';
 
-const TARGET_SOLVE_MS = 2;
-const TARGET_SWEEP_MS = 150;
-const TARGET_MONTE_CARLO_MS = 1000;
-const MONTE_CARLO_SAMPLES = 2000;
+// Targets of issue 13 (a lean solver); the previous figures are in bench-previous.json.
+const TARGET_SOLVE_MS = 0.3;
+const TARGET_SWEEP_MS = 25;
+const TARGET_MONTE_CARLO_MS = 1500;
+const MONTE_CARLO_SAMPLES = 10_000;
+
+interface PreviousFigures {
+  solveTwelveLegs_ms: number;
+  sweep100x60_ms: number;
+  monteCarlo10000_ms: number;
+  cliPlansPerSecond: number;
+  gpx190k_ms: number;
+}
+const PREVIOUS = JSON.parse(
+  readFileSync(fileURLToPath(new URL('./bench-previous.json', import.meta.url)), 'utf8'),
+) as PreviousFigures;
+/** "0.42× the previous 0.75 ms" — below 1 is faster (for rates: above 1 is faster). */
+const ratio = (now: number, before: number, unit: string) =>
+  `${(now / before).toFixed(2)}× the previous ${before} ${unit}`;
 const TARGET_BATCH_PLANS_S = 500;
 const BATCH_FILES = 1000;
 const TARGET_GPX_MS = 300;
@@ -220,7 +237,7 @@ function benchSolve(plan: Plan, source: string): void {
     `1. Solve ${source} (${plan.legs.length} legs, verdict ${r.verdict}), 400 runs after 100 warm-up`,
   );
   console.log(
-    `   median ${ms(s.median)}, p90 ${ms(s.p90)}, min ${ms(s.min)}   target ≤ ${TARGET_SOLVE_MS} ms median: ${verdict(s.median <= TARGET_SOLVE_MS)}`,
+    `   median ${ms(s.median)}, p90 ${ms(s.p90)}, min ${ms(s.min)}   target ≤ ${TARGET_SOLVE_MS} ms median: ${verdict(s.median <= TARGET_SOLVE_MS)}; ${ratio(s.median, PREVIOUS.solveTwelveLegs_ms, 'ms')}`,
   );
   console.log(
     `   ODE steps per leg: [${steps.join(', ')}], mean over flight legs ${mean.toFixed(1)}`,
@@ -281,7 +298,7 @@ function benchSweep(plan: Plan): void {
     `2. Speed × altitude map of leg ${legIndex + 1}: 100 speeds (${range.lo_m_s.toFixed(1)}–${range.hi_m_s.toFixed(1)} m/s) × 60 altitudes, full leg integration, 7 runs`,
   );
   console.log(
-    `   median ${ms(s.median)}, min ${ms(s.min)}   target ≤ ${TARGET_SWEEP_MS} ms: ${verdict(s.median <= TARGET_SWEEP_MS)}`,
+    `   median ${ms(s.median)}, min ${ms(s.min)}   target ≤ ${TARGET_SWEEP_MS} ms: ${verdict(s.median <= TARGET_SWEEP_MS)}; ${ratio(s.median, PREVIOUS.sweep100x60_ms, 'ms')}`,
   );
   console.log(
     `   ${feasible} of 6000 cells flyable, ${(last.steps / last.legsFlown).toFixed(1)} ODE steps per leg on average`,
@@ -403,7 +420,7 @@ function benchMonteCarlo(plan: Plan, source: string): void {
     `6. Reserve Monte Carlo of ${source}: ${MONTE_CARLO_SAMPLES} samples ('fast' tolerance), 3 runs after a warm-up`,
   );
   console.log(
-    `   median ${ms(s.median)}, min ${ms(s.min)}   target ≤ ${TARGET_MONTE_CARLO_MS} ms: ${verdict(s.median <= TARGET_MONTE_CARLO_MS)}`,
+    `   median ${ms(s.median)}, min ${ms(s.min)}   target ≤ ${TARGET_MONTE_CARLO_MS} ms: ${verdict(s.median <= TARGET_MONTE_CARLO_MS)}; ${ratio(s.median, PREVIOUS.monteCarlo10000_ms, 'ms')}`,
   );
   console.log(
     `   reserve not kept in ${(100 * last.probabilityReserveNotKept).toFixed(1)} % of samples; ${(MONTE_CARLO_SAMPLES / (s.median / 1000)).toFixed(0)} solves per second`,
@@ -446,7 +463,7 @@ function benchBatch(): void {
     `7. CLI batch mode: ${BATCH_FILES} copies of the 12-leg plan file, read → decode → validate → solve → NDJSON row, in one process, 3 runs`,
   );
   console.log(
-    `   median ${ms(s.median)} → ${rate.toFixed(0)} plans/s   target ≥ ${TARGET_BATCH_PLANS_S} plans/s: ${verdict(rate >= TARGET_BATCH_PLANS_S)} (${(bytesOut / 3 / BATCH_FILES).toFixed(0)} characters per row)`,
+    `   median ${ms(s.median)} → ${rate.toFixed(0)} plans/s   target ≥ ${TARGET_BATCH_PLANS_S} plans/s: ${verdict(rate >= TARGET_BATCH_PLANS_S)} (${(bytesOut / 3 / BATCH_FILES).toFixed(0)} characters per row); ${ratio(rate, PREVIOUS.cliPlansPerSecond, 'plans/s (one process per plan)')}`,
   );
 }
 
@@ -483,7 +500,7 @@ function benchGpx(): void {
       text_MB: number;
     };
     console.log(
-      `   median ${ms(r.median_ms)}   target ≤ ${TARGET_GPX_MS} ms: ${verdict(r.median_ms <= TARGET_GPX_MS)} (CPU ${ms(r.cpuPerParse_ms)} per parse); ${r.waypoints} waypoints`,
+      `   median ${ms(r.median_ms)}   target ≤ ${TARGET_GPX_MS} ms: ${verdict(r.median_ms <= TARGET_GPX_MS)} (CPU ${ms(r.cpuPerParse_ms)} per parse); ${r.waypoints} waypoints; ${ratio(r.median_ms, PREVIOUS.gpx190k_ms, 'ms')}`,
     );
     console.log(
       `   peak memory above the process's start ${r.peakAbove_MB.toFixed(0)} MB (the ${r.text_MB.toFixed(0)} MB text included)   target ≤ ${TARGET_GPX_MB} MB: ${verdict(r.peakAbove_MB <= TARGET_GPX_MB)}`,

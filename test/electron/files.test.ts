@@ -125,6 +125,29 @@ describe('readPlanFile', () => {
     expect(loaded.message).toContain('bad.legwise.json');
   });
 
+  it('refuses a UTF-16 file and bytes that are not UTF-8 by name (RFC 8259 section 8.1)', async () => {
+    const utf16 = path.join(dir, 'utf16.legwise.json');
+    const text = serializePlan(newPlan());
+    await fsp.writeFile(
+      utf16,
+      Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(text, 'utf16le')]),
+    );
+    const a = await readPlanFile(utf16);
+    expect(a.ok).toBe(false);
+    if (!a.ok) {
+      expect(a.code).toBe('INVALID_PLAN');
+      expect(a.message).toContain('the file is UTF-16 (little-endian) text; plan files are UTF-8');
+    }
+    const latin1 = path.join(dir, 'latin1.legwise.json');
+    await fsp.writeFile(
+      latin1,
+      Buffer.from(text.replace('"name": "', '"name": "Caf\u00e9 '), 'latin1'),
+    );
+    const b = await readPlanFile(latin1);
+    expect(b.ok).toBe(false);
+    if (!b.ok) expect(b.message).toMatch(/byte 0xE9 at line \d+, column \d+ is not UTF-8 text/);
+  });
+
   it('refuses text that is not JSON, naming the line', async () => {
     const target = path.join(dir, 'junk.legwise.json');
     await fsp.writeFile(target, '{ "format": "legwise-plan",\n  oops }');

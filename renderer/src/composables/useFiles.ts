@@ -5,7 +5,12 @@
  */
 import { nextTick, ref, watch, type Ref } from 'vue';
 import { newPlan } from '../../../core/plan/defaults.ts';
-import { parsePlanText, serializePlan, type PlanIssue } from '../../../core/plan/load.ts';
+import {
+  parsePlanBytes,
+  parsePlanText,
+  serializePlan,
+  type PlanIssue,
+} from '../../../core/plan/load.ts';
 import type { Plan } from '../../../core/plan/schema.ts';
 import type { MenuCommand } from '../../../electron/contract.ts';
 import type { PlanStore } from './usePlan.ts';
@@ -55,7 +60,8 @@ export const PREPARE_PRINT_EVENT = 'legwise:prepare-print';
 export const PRINT_DONE_EVENT = 'legwise:print-done';
 const AUTOSAVE_DELAY_MS = 2000;
 
-function pickFileText(): Promise<{ name: string; text: string } | null> {
+/** The chosen file's bytes: decoded strictly by parsePlanBytes, never as lossy text. */
+function pickFileBytes(): Promise<{ name: string; bytes: Uint8Array } | null> {
   return new Promise((resolve) => {
     const input = document.createElement('input');
     input.type = 'file';
@@ -63,8 +69,8 @@ function pickFileText(): Promise<{ name: string; text: string } | null> {
     input.addEventListener('change', () => {
       const file = input.files?.[0];
       if (!file) return resolve(null);
-      file.text().then(
-        (text) => resolve({ name: file.name, text }),
+      file.arrayBuffer().then(
+        (buffer) => resolve({ name: file.name, bytes: new Uint8Array(buffer) }),
         () => resolve(null),
       );
     });
@@ -110,9 +116,9 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
       status.value = r.message;
       return;
     }
-    const picked = await pickFileText();
+    const picked = await pickFileBytes();
     if (!picked) return;
-    const loaded = parsePlanText(picked.text);
+    const loaded = parsePlanBytes(picked.bytes);
     if (loaded.ok) opened(loaded.plan, picked.name);
     else {
       openIssues.value = loaded.issues;
