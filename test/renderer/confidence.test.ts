@@ -5,7 +5,14 @@ import {
   createConfidenceRun,
   type ConfidenceResult,
 } from '../../renderer/src/support/confidence.ts';
-import { keptSentence, importanceRows } from '../../renderer/src/support/confidenceText.ts';
+import {
+  correlationLine,
+  failureLines,
+  keptSentence,
+  importanceRows,
+} from '../../renderer/src/support/confidenceText.ts';
+import { failureSentence } from '../../core/uncertainty/failureCauses.ts';
+import { formatQuantity } from '../../core/format.ts';
 import {
   defaultUncertainty,
   spreadsOf,
@@ -121,5 +128,35 @@ describe('reserve confidence', () => {
     });
     while (!direct.step(25));
     expect(c.current.value).toEqual(direct.result());
+  });
+
+  it('lists the failed flights by leg and cause, and the wind correlation used', () => {
+    // The survey loiter (19 m/s TAS) in a 17 m/s wind, σ 3 m/s: some flights cannot hold
+    // station. The panel's lines are core's sentences in the chosen units.
+    const demo = examplePlan('survey-uav-electric');
+    const legs = demo.legs.map((l, i) =>
+      i === 3 && l.kind === 'loiter' ? { ...l, wind: { speed_m_s: 17, from_deg: 40 } } : l,
+    );
+    const plan = { ...demo, legs };
+    const spreads = { ...spreadsFromDefaults(plan), windSpeed_m_s: 3 };
+    const r = createConfidenceRun(plan, spreads, { samples: 150, seed: 5 });
+    while (!r.step(50));
+    const result = r.result();
+    expect(result.failures.length).toBeGreaterThan(0);
+    const units = {
+      format: (v: number, q: Parameters<typeof formatQuantity>[1]) =>
+        formatQuantity(v, q, 'aviation'),
+    };
+    const lines = failureLines(result, plan, units);
+    expect(lines[0]).toBe(
+      failureSentence(result.failures[0]!, 150, plan, result.consumable, units.format),
+    );
+    expect(lines[0]).toMatch(
+      /^In \d+ of 150 simulated flights leg 4 “Survey lines” \(loiter\) could not hold station in a wind of .* kt\.$/,
+    );
+    // No uncertainty block: the default correlation, said to be common practice.
+    expect(correlationLine(result, plan)).toBe(
+      'Wind errors of the legs of one flight correlated 0.8 (default, common practice).',
+    );
   });
 });

@@ -5,6 +5,7 @@
  */
 import type { Plan, Uncertainty } from '../../../core/plan/schema.ts';
 import { spreadsFromDefaults, type ReserveSpreads } from '../../../core/uncertainty/spreads.ts';
+import { DEFAULT_WIND_CORRELATION } from '../../../core/uncertainty/windErrors.ts';
 import { num, type FieldDef, type OptionalBlock } from './fieldTypes.ts';
 
 export const DEFAULT_SAMPLES = 1000;
@@ -53,6 +54,11 @@ export function uncertaintyFields(plan: Plan): FieldDef[] {
   return [
     f('windSpeed_m_s', 'Wind speed, per leg', 'airspeed', 'm_s'),
     f('windDirection_deg', 'Wind direction, per leg', 'angle', 'deg'),
+    num(`${p}.windCorrelation`, 'Wind error correlation between legs', null, 'fraction', {
+      block,
+      optional: true,
+      hint: `0 independent, 1 the same on every leg; empty: ${DEFAULT_WIND_CORRELATION} (common practice)`,
+    }),
     f('cd0', 'Zero-lift drag CD0', 'ratio', 'fraction'),
     ...(type !== 'jet' ? [f('efficiency', 'Propeller efficiency', 'ratio', 'fraction')] : []),
     ...(type !== 'electric'
