@@ -20,6 +20,7 @@ import { MENU_COMMAND_CHANNEL } from './channels.ts';
 import type { RecentFile } from './contract.ts';
 import { dialogPorts, showAbout } from './dialogs.ts';
 import { createDocument, toRecentFiles, type LegwiseDocument } from './document.ts';
+import { readShellSettings, writeShellSettings } from './files.ts';
 import { registerIpc } from './ipc.ts';
 import { buildMenuTemplate } from './menu.ts';
 import { planPathFromArgv } from './openRequests.ts';
@@ -127,15 +128,24 @@ async function start(): Promise<void> {
   });
   doc = shellDoc;
 
-  function setMenu(recent: readonly RecentFile[]): void {
+  let recentShown: readonly RecentFile[] = [];
+  let backupGenerations = (await readShellSettings(userDataDir)).backupGenerations;
+  function setMenu(recent: readonly RecentFile[] = recentShown): void {
+    recentShown = recent;
     const template = buildMenuTemplate(
       process.platform,
       {
         command: (command) => win?.webContents.send(MENU_COMMAND_CHANNEL, command),
         about: () => void showAbout(win),
         quit: () => app.quit(),
+        setBackups: (generations) =>
+          void writeShellSettings(userDataDir, { backupGenerations: generations })
+            .then(() => {
+              backupGenerations = generations;
+            })
+            .finally(() => setMenu()),
       },
-      { appName: APP_NAME, recent, devTools: !app.isPackaged },
+      { appName: APP_NAME, recent, devTools: !app.isPackaged, backupGenerations },
     );
     Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   }

@@ -14,6 +14,8 @@ export interface MenuHandlers {
   command(command: MenuCommand): void;
   about(): void;
   quit(): void;
+  /** File ▸ Backups to Keep: how many earlier versions a save keeps beside the plan. */
+  setBackups?(generations: number): void;
 }
 
 export interface MenuOptions {
@@ -21,6 +23,23 @@ export interface MenuOptions {
   recent: readonly RecentFile[];
   /** Developer tools only while developing; never in a packaged app. */
   devTools: boolean;
+  /** The current backup setting (shell-settings.json), shown as the checked choice. */
+  backupGenerations?: number;
+}
+
+/** The choices File ▸ Backups to Keep offers (any 0–20 can be set in shell-settings.json). */
+export const BACKUP_CHOICES = [0, 1, 3, 5, 10] as const;
+
+function backupsSubmenu(
+  handlers: MenuHandlers,
+  current: number | undefined,
+): MenuItemConstructorOptions[] {
+  return BACKUP_CHOICES.map((n) => ({
+    label: n === 0 ? 'None' : n === 1 ? '1 earlier version' : `${n} earlier versions`,
+    type: 'radio' as const,
+    checked: n === current,
+    click: () => handlers.setBackups?.(n),
+  }));
 }
 
 /** The menu's shortcuts, from the one list Help shows (shortcutList.ts). */
@@ -69,6 +88,14 @@ function fileMenu(
     { type: 'separator' },
     { label: 'Save', accelerator: ACCELERATORS.save, click: send('save') },
     { label: 'Save As…', accelerator: ACCELERATORS.saveAs, click: send('saveAs') },
+    ...(handlers.setBackups
+      ? [
+          {
+            label: 'Backups to Keep',
+            submenu: backupsSubmenu(handlers, options.backupGenerations),
+          },
+        ]
+      : []),
     { type: 'separator' },
     { label: 'Print…', accelerator: ACCELERATORS.print, click: send('print') },
     {

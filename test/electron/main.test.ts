@@ -59,6 +59,26 @@ describe('electron/main.ts', () => {
     expect(Menu.setApplicationMenu).toHaveBeenCalled();
   });
 
+  it('File ▸ Backups to Keep writes the setting the next save uses', async () => {
+    type Item = { label?: string; submenu?: Item[]; click?: () => void; checked?: boolean };
+    const lastTemplate = () =>
+      (Menu.buildFromTemplate.mock.calls.at(-1)?.[0] ?? []) as unknown as Item[];
+    const find = (items: Item[], label: string): Item | undefined =>
+      items.flatMap((i) => [i, ...(i.submenu ?? [])]).find((i) => i.label === label) ??
+      items
+        .flatMap((i) => i.submenu ?? [])
+        .reduce<Item | undefined>((hit, i) => hit ?? find(i.submenu ?? [], label), undefined);
+    expect(find(lastTemplate(), '3 earlier versions')?.checked).toBe(true); // the default
+    find(lastTemplate(), '5 earlier versions')?.click?.();
+    await vi.waitFor(async () => {
+      const saved = JSON.parse(
+        await fsp.readFile(path.join(app.userData, 'shell-settings.json'), 'utf8'),
+      );
+      expect(saved).toEqual({ backupGenerations: 5 });
+    });
+    await vi.waitFor(() => expect(find(lastTemplate(), '5 earlier versions')?.checked).toBe(true));
+  });
+
   it('answers every contract channel, for our page only', async () => {
     expect([...ipcMain.handlers.keys()].sort()).toEqual(INVOKE_METHODS.map(channelOf).sort());
     expect(await invoke('listRecent')).toEqual({ ok: true, files: [] });

@@ -119,4 +119,20 @@ describe('buildMenuTemplate', () => {
     expect(roles(false)).not.toContain('toggleDevTools');
     expect(roles(true)).toContain('toggleDevTools');
   });
+
+  it('File ▸ Backups to Keep shows the setting and changes it', () => {
+    const h = { ...handlers(), setBackups: vi.fn() };
+    const t = buildMenuTemplate('linux', h, { ...options, backupGenerations: 3 });
+    const sub = byLabel(t, 'Backups to Keep')?.submenu as MenuItemConstructorOptions[];
+    expect(sub.map((i) => i.label)).toEqual([
+      'None',
+      '1 earlier version',
+      '3 earlier versions',
+      '5 earlier versions',
+      '10 earlier versions',
+    ]);
+    expect(sub.filter((i) => i.checked).map((i) => i.label)).toEqual(['3 earlier versions']);
+    click(sub[3]);
+    expect(h.setBackups).toHaveBeenCalledWith(5);
+  });
 });
