@@ -39,6 +39,8 @@ export type Outcome<T extends object = object> = ({ ok: true } & T) | Failure;
 export interface OpenedPlan {
   plan: Plan;
   warnings: string[];
+  /** What updating an older plan file changed, in plain words (empty for a current file). */
+  changes?: string[];
   filePath: string;
 }
 export interface SavedFile {

@@ -124,7 +124,13 @@ export function createDocument(ports: ShellPorts) {
     showTitle();
     publishRecent(await addRecent(recentStore, filePath));
     ports.addRecentDocument?.(filePath);
-    return { ok: true, plan: loaded.plan, warnings: loaded.warnings, filePath };
+    return {
+      ok: true,
+      plan: loaded.plan,
+      warnings: loaded.warnings,
+      changes: loaded.changes,
+      filePath,
+    };
   }
 
   /** Another program changed the file: ask, and lose neither version. */

@@ -29,6 +29,8 @@ export interface FileActions {
   status: Ref<string>;
   /** Problems of a plan file that could not be opened. */
   openIssues: Ref<PlanIssue[]>;
+  /** What updating an older plan file changed (the loader's `changes`), until dismissed. */
+  openChanges: Ref<string[]>;
   /** A plan autosaved by an earlier session, offered back. */
   recovered: Ref<Plan | null>;
   newPlan(): Promise<void>;
@@ -83,6 +85,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
   const api = window.legwise;
   const status = ref('');
   const openIssues = ref<PlanIssue[]>([]);
+  const openChanges = ref<string[]>([]);
   const recovered = ref<Plan | null>(null);
   const helpOpen = ref(false);
 
@@ -92,10 +95,14 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     return null;
   };
 
-  const opened = (p: Plan, where: string) => {
+  const opened = (p: Plan, where: string, changes: readonly string[] = []) => {
     plan.load(p);
     openIssues.value = [];
-    status.value = `Opened ${where}.`;
+    openChanges.value = [...changes];
+    status.value =
+      changes.length > 0
+        ? `Opened ${where} (updated from an older plan file).`
+        : `Opened ${where}.`;
   };
 
   async function newPlanAction(): Promise<void> {
@@ -110,7 +117,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
   async function open(): Promise<void> {
     if (api) {
       const r = await api.openPlan();
-      if (r.ok) return opened(r.plan, r.filePath);
+      if (r.ok) return opened(r.plan, r.filePath, r.changes);
       if (r.code === 'CANCELLED') return;
       openIssues.value = r.issues ?? [];
       status.value = r.message;
@@ -119,7 +126,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     const picked = await pickFileBytes();
     if (!picked) return;
     const loaded = parsePlanBytes(picked.bytes);
-    if (loaded.ok) opened(loaded.plan, picked.name);
+    if (loaded.ok) opened(loaded.plan, picked.name, loaded.changes);
     else {
       openIssues.value = loaded.issues;
       status.value = `${picked.name} is not a plan this version can open.`;
@@ -132,7 +139,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
     if (api) {
       const r = as ? await api.savePlanAs(p) : await api.savePlan(p);
       if (r.ok && r.reloaded) {
-        opened(r.reloaded.plan, r.reloaded.filePath);
+        opened(r.reloaded.plan, r.reloaded.filePath, r.reloaded.changes);
         status.value = `Reloaded ${r.filePath} as another program left it; nothing was saved.`;
       } else if (r.ok) {
         plan.markSaved();
@@ -226,7 +233,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
   async function openOffered(): Promise<void> {
     if (!api) return;
     const r = await api.openOffered();
-    if (r.ok) return opened(r.plan, r.filePath);
+    if (r.ok) return opened(r.plan, r.filePath, r.changes);
     if (r.code === 'CANCELLED') return;
     openIssues.value = r.issues ?? [];
     status.value = r.message;
@@ -274,7 +281,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
       openRecent: async () => {
         if (!api || command.kind !== 'openRecent') return;
         const r = await api.openRecent(command.filePath);
-        if (r.ok) opened(r.plan, r.filePath);
+        if (r.ok) opened(r.plan, r.filePath, r.changes);
         else status.value = r.message;
       },
     };
@@ -311,6 +318,7 @@ export function createFileActions(plan: PlanStore, result: ResultStore, units: U
 
   return {
     status,
+    openChanges,
     openIssues,
     recovered,
     newPlan: newPlanAction,

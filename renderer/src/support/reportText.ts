@@ -1,5 +1,5 @@
 /** The aircraft and conditions summary of the printed report, as label–value pairs. */
-import type { Plan } from '../../../core/plan/schema.ts';
+import { DEFAULT_MIN_HEIGHT_ABOVE_FIELD_M, type Plan } from '../../../core/plan/schema.ts';
 import type { PlanResult } from '../../../core/solver/types.ts';
 import type { Quantity } from '../../../core/units.ts';
 import { formatSignificant } from '../../../core/format.ts';
@@ -61,7 +61,7 @@ export function aircraftSummary(plan: Plan, result: PlanResult | null, u: Fmt): 
   const r = plan.reserves;
   items.push({
     label: 'Reserve policy',
-    value: `hold ${u.format(r.holdTime_s, 'time')} at ${u.format(r.holdAltitude_m, 'altitude')}, contingency ${pct(r.contingencyFraction)}, alternate ${u.format(r.alternateDistance_m, 'distance')}${pp.type === 'electric' ? `, battery floor ${pct(r.socFloor)}` : ''}`,
+    value: `final reserve ${u.format(r.holdTime_s, 'time')} at ${r.finalReserveSpeed === 'bestEndurance' ? 'best endurance' : 'normal cruise'}, ${r.finalReserveLevel === 'lastCruise' ? 'at the last cruise altitude' : `at ${u.format(r.holdAltitude_m, 'altitude')}`} (at least ${u.format(r.minHeightAboveField_m ?? DEFAULT_MIN_HEIGHT_ABOVE_FIELD_M, 'altitude')} above the arrival field), contingency ${pct(r.contingencyFraction)}, alternate ${u.format(r.alternateDistance_m, 'distance')}${pp.type === 'electric' ? `, battery floor ${pct(r.socFloor)}` : ''}`,
   });
   return items;
 }
