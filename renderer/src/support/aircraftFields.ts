@@ -6,6 +6,7 @@ import type { JetPowerplant, Plan, Powerplant, Fuel } from '../../../core/plan/s
 import { choice, num, text, type FieldDef, type FieldSection } from './fieldTypes.ts';
 import { missionWindFields } from './missionWindFields.ts';
 import { setAtPath } from './paths.ts';
+import { engineFields, propellerCurveFields, stallDragRiseFields } from './propellerFields.ts';
 
 const A = 'aircraft';
 
@@ -18,6 +19,7 @@ export function aircraftSections(plan: Plan): FieldSection[] {
         text(`${A}.name`, 'Aircraft name'),
         num(`${A}.wingArea_m2`, 'Wing area', 'area', 'm2'),
         num(`${A}.ceiling_m`, 'Operating ceiling', 'altitude', 'm'),
+        ...engineFields(plan),
       ],
     },
     { id: 'polar', title: 'Drag polar', fields: polarFields(plan) },
@@ -66,6 +68,7 @@ function polarFields(plan: Plan): FieldDef[] {
       optional: true,
       hint: 'optional',
     }),
+    ...stallDragRiseFields(plan),
   ];
 }
 
@@ -135,6 +138,7 @@ function powerplantFields(pp: Powerplant): FieldDef[] {
           : []),
         num(`${p}.criticalAltitude_m`, 'Critical altitude (0 = none)', 'altitude', 'm'),
         num(`${p}.propEfficiency`, 'Propeller efficiency', 'ratio', 'fraction'),
+        ...propellerCurveFields(pp),
         num(`${p}.bsfc_kg_J`, 'BSFC', 'bsfc', 'kg_J'),
         num(`${p}.idlePowerFraction`, 'Idle power (of max)', 'ratio', 'fraction'),
         ...fuelFields(`${p}.fuel`),
@@ -146,6 +150,7 @@ function powerplantFields(pp: Powerplant): FieldDef[] {
         num(`${p}.motorEfficiency`, 'Motor efficiency', 'ratio', 'fraction'),
         num(`${p}.controllerEfficiency`, 'Controller efficiency', 'ratio', 'fraction'),
         num(`${p}.propEfficiency`, 'Propeller efficiency', 'ratio', 'fraction'),
+        ...propellerCurveFields(pp),
         num(`${p}.battery.energy_J`, 'Battery energy (nominal)', 'energy', 'J'),
         num(`${p}.battery.mass_kg`, 'Battery mass', 'mass', 'kg'),
         num(`${p}.battery.usableFraction`, 'Usable fraction', 'ratio', 'fraction'),
