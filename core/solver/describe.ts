@@ -99,6 +99,10 @@ export function checkAmount(check: Check, v: number, system: UnitSystemId): stri
  * check as `checkAmount` gives them.
  */
 export function checkFigures(check: Check, system: UnitSystemId): { value: string; limit: string } {
+  // Yes-or-no shape checks: a count of legs out of order against none allowed.
+  if (check.id === 'shape:order') {
+    return { value: `${check.value} out of order`, limit: 'none' };
+  }
   const Treq = check.thrustRequired_N;
   const Tav = check.thrustAvailable_N;
   if (Treq !== undefined && Tav !== undefined) {
