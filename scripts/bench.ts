@@ -20,6 +20,10 @@
  * printed, never asserted.
  */
 import { spawnSync } from 'node:child_process';
+import { atmosphereAt } from '../core/atmosphere.ts';
+import { jetDesignPoint } from '../core/plan/migrations/jetMachLapse.ts';
+import { tsfcAt_kg_Ns } from '../core/propulsion/jet.ts';
+
 import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -403,7 +407,33 @@ function benchExamples(): void {
     });
     const kind = plan.aircraft.powerplant.type;
     console.log(`   ${file.padEnd(28)} ${kind.padEnd(10)} ${cells.join(', ')}`);
+    const old = withDensityLapseJet(plan);
+    if (old !== null) {
+      const solveOld = () => solvePlan(old);
+      const solveNew = () => solvePlan(plan);
+      time(solveOld, 30);
+      const a = stats(time(solveNew, 100)).median;
+      const b = stats(time(solveOld, 100)).median;
+      console.log(
+        `   ${''.padEnd(28)} engine-class lapse + Mach TSFC ${ms(a)} vs σ^0.8 + constant TSFC (the old jet model) ${ms(b)}: ×${(a / b).toFixed(2)}`,
+      );
+    }
   }
+}
+
+/**
+ * A jet plan with the version-1 engine model: T_SL·σ^0.8 and one TSFC, the one the Mach-and-θ
+ * form gives at the plan's design point (core/plan/migrations/jetMachLapse.ts), for timing.
+ */
+function withDensityLapseJet(plan: Plan): Plan | null {
+  const pp = plan.aircraft.powerplant;
+  if (pp.type !== 'jet' || pp.thrustLapse === undefined) return null;
+  const point = jetDesignPoint(plan as unknown as Record<string, unknown>);
+  const atm = atmosphereAt(point.altitude_m, plan.environment.isaOffset_K);
+  const tsfc = tsfcAt_kg_Ns(pp, atm, point.mach);
+  const { thrustLapse: _l, tsfcMachFactor: _f, ...rest } = pp;
+  const powerplant = { ...rest, thrustLapseExponent: 0.8, tsfc_kg_Ns: tsfc };
+  return { ...plan, aircraft: { ...plan.aircraft, powerplant } };
 }
 
 function benchMonteCarlo(plan: Plan, source: string): void {
