@@ -102,4 +102,38 @@ describe.runIf(haveChromium || !!process.env.CI)('layout at 1366×768 and 1920×
       }
     }
   }
+
+  it('the status line sits beside the caution, covers no field and clears itself', async () => {
+    await page.setViewportSize({ width: 1366, height: 768 });
+    // A person exports the table; the page says so in the status line.
+    const download = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'CSV', exact: true }).click();
+    await download;
+    const status = page.locator(byTestId('status'));
+    await expect(status.innerText()).resolves.toMatch(/CSV/);
+    const overlaps = await status.evaluate((el) => {
+      const r = el.getBoundingClientRect();
+      return [
+        ...document.querySelectorAll('input, select, textarea, button, [data-testid="caution"]'),
+      ]
+        .filter((f) => {
+          const b = f.getBoundingClientRect();
+          return (
+            b.width > 0 &&
+            r.left < b.right &&
+            b.left < r.right &&
+            r.top < b.bottom &&
+            b.top < r.bottom
+          );
+        })
+        .map((f) => f.outerHTML.slice(0, 60));
+    });
+    expect(overlaps).toEqual([]);
+    // It clears itself (STATUS_CLEAR_MS = 6 s in useFiles.ts); allow twice that.
+    await page.waitForFunction(
+      (sel) => (document.querySelector(sel)?.textContent ?? '').trim() === '',
+      byTestId('status'),
+      { timeout: 12_000 },
+    );
+  });
 });

@@ -81,9 +81,22 @@ function pickFileBytes(): Promise<{ name: string; bytes: Uint8Array } | null> {
   });
 }
 
+/** How long a status message stays (it clears itself; common practice for such notices). */
+export const STATUS_CLEAR_MS = 6000;
+
 export function createFileActions(plan: PlanStore, result: ResultStore, units: Units): FileActions {
   const api = window.legwise;
   const status = ref('');
+  // A status message clears itself; a newer one restarts the clock.
+  let statusTimer: ReturnType<typeof setTimeout> | undefined;
+  watch(status, (text) => {
+    clearTimeout(statusTimer);
+    if (text) {
+      statusTimer = setTimeout(() => {
+        if (status.value === text) status.value = '';
+      }, STATUS_CLEAR_MS);
+    }
+  });
   const openIssues = ref<PlanIssue[]>([]);
   const openChanges = ref<string[]>([]);
   const recovered = ref<Plan | null>(null);
