@@ -162,6 +162,10 @@ export function formatQuantity(
   let text = formatNumber(r.value, r.decimals, opts.signed ?? quantity === 'temperatureDelta');
   // Nothing used reads "0", not "0.00" (a take-off leg of an electric aircraft, say).
   if (/^0\.0+$/.test(text)) text = '0';
+  // An ISA deviation is always written with its sign, zero too ("ISA +0 °C").
+  if (quantity === 'temperatureDelta' && opts.signed === undefined && /^0(\.0+)?$/.test(text)) {
+    text = `+${text}`;
+  }
   if (opts.withUnit === false) return text;
   const label = UNITS[r.unit].label;
   if (label === '') return text;
@@ -199,6 +203,5 @@ export function formatDuration(
 /** ISA deviation as pilots write it: "ISA +5 °C", "ISA -10 °C", "ISA +0 °C". */
 export function formatIsaDeviation(delta_K: number, system: UnitSystemId, unit?: UnitId): string {
   if (!Number.isFinite(delta_K)) return `ISA ${NO_VALUE}`;
-  const text = formatQuantity(delta_K, 'temperatureDelta', system, unit ? { unit } : {});
-  return `ISA ${/^[-+]/.test(text) ? text : `+${text}`}`;
+  return `ISA ${formatQuantity(delta_K, 'temperatureDelta', system, unit ? { unit } : {})}`;
 }

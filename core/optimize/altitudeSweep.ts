@@ -11,6 +11,7 @@
  * every trial flies the same ground track.
  */
 import { InputError } from '../errors.ts';
+import { levelsBetween, type LevelGrid } from '../levels.ts';
 import type { ClimbLeg, Plan } from '../plan/schema.ts';
 import type { PlanResult } from '../solver/types.ts';
 import {
@@ -32,6 +33,11 @@ export interface AltitudeSweepOptions {
   points?: number;
   /** Refine the best grid point by golden section (default true). */
   refine?: boolean;
+  /**
+   * Also suggest the best level people fly (500 ft or 100 m steps, optionally the
+   * semicircular rule, core/levels.ts): the better of the levels either side of the optimum.
+   */
+  levels?: LevelGrid;
 }
 
 export interface AltitudeSweepResult {
@@ -48,6 +54,8 @@ export interface AltitudeSweepResult {
    * highest altitude the climb reaches; null when it lies below the top.
    */
   limitedBy: 'ceiling' | 'climb' | null;
+  /** With `levels`: the flyable level that lands with the most; null if none in range works. */
+  level?: { altitude_m: number; remaining: number } | null;
 }
 
 /** The climb legs before the first cruise leg, which set the cruise altitude. */
@@ -66,6 +74,29 @@ function climbsBeforeCruise(plan: Plan): number[] {
     );
   }
   return climbs;
+}
+
+/**
+ * The level of the grid next below and next above the optimum (inside [lo, top]) that
+ * lands with the most; the whole mission is solved at each, as for the optimum itself.
+ */
+function bestLevel(
+  best_m: number,
+  lo: number,
+  top: number,
+  grid: LevelGrid,
+  remainingAt: (h: number) => number | null,
+): { altitude_m: number; remaining: number } | null {
+  const all = levelsBetween(lo, top, grid);
+  const below = all.filter((h) => h <= best_m).at(-1);
+  const above = all.find((h) => h > best_m);
+  let out: { altitude_m: number; remaining: number } | null = null;
+  for (const h of [below, above]) {
+    if (h === undefined) continue;
+    const v = remainingAt(h);
+    if (v !== null && (out === null || v > out.remaining)) out = { altitude_m: h, remaining: v };
+  }
+  return out;
 }
 
 /**
@@ -137,7 +168,12 @@ export function bestCruiseAltitude(
       best;
   }
   const atTop = best !== null && top - best.x <= 1;
+  const level =
+    options.levels && best !== null
+      ? bestLevel(best.x, lo, top, options.levels, remainingAt)
+      : undefined;
   return {
+    ...(level !== undefined ? { level } : {}),
     best: best === null ? null : { altitude_m: best.x, remaining: best.value },
     curve,
     top_m: top,

@@ -136,4 +136,20 @@ describe.runIf(haveChromium || !!process.env.CI)('layout at 1366×768 and 1920×
       { timeout: 12_000 },
     );
   });
+
+  it('the altitude suggestion is a level people fly (500 ft steps) and is applied as such', async () => {
+    await page.setViewportSize({ width: 1366, height: 768 });
+    await page.selectOption(byTestId('demo-picker'), 'twelve-legs');
+    await page.locator(byTestId('unit-aviation')).check({ force: true });
+    await page.click(byTestId('tab-tune'));
+    await page.click(byTestId('tune-alt-run'));
+    const text = await page.locator(byTestId('tune-alt-result')).innerText({ timeout: 60_000 });
+    // "6000 ft (now 3940 ft): lands with …": 500 ft levels (common practice).
+    const suggested = Number(/^(\d+) ft/.exec(text)?.[1]);
+    expect(suggested % 500).toBe(0);
+    await page.click(byTestId('tune-alt-apply'));
+    const summaries = await page.locator(`${byTestId('leg-row')} .leg-summary`).allInnerTexts();
+    expect(summaries.some((t) => t.startsWith(`to ${suggested} ft`))).toBe(true);
+    await page.click(byTestId('tab-profile'));
+  });
 });

@@ -147,6 +147,7 @@ describe('pilot precision per quantity', () => {
     expect(formatIsaDeviation(2.5, 'si')).toBe('ISA +2.5 K');
     expect(formatIsaDeviation(10, 'si', 'degF_delta')).toBe('ISA +18 °F'); // 1 K = 9/5 °F
     expect(formatQuantity(5, 'temperatureDelta', 'aviation')).toBe('+5 °C');
+    expect(formatQuantity(0, 'temperatureDelta', 'si')).toBe('+0 K');
     expect(formatIsaDeviation(Number.NaN, 'si')).toBe('ISA —');
   });
 });

@@ -21,11 +21,14 @@ export interface Planner {
 
 export function createPlanner(initial: Plan, system: UnitSystemId = 'si'): Planner {
   const plan = createPlanStore(initial);
+  const units = createUnits(system);
   return {
     plan,
     result: createResultStore(plan.lastValid, plan.valid),
-    units: createUnits(system),
-    tune: createTune(plan),
+    units,
+    tune: createTune(plan, () =>
+      units.unitFor('altitude') === 'ft' ? { step: 'ft500' } : { step: 'm100' },
+    ),
     confidence: createConfidence(plan),
   };
 }

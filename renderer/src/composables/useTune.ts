@@ -14,6 +14,7 @@ import { maxPayload, type MaxPayloadResult } from '../../../core/optimize/maxPay
 import { reserveSensitivity, type SensitivityEntry } from '../../../core/optimize/sensitivity.ts';
 import type { PlanStore } from './usePlan.ts';
 import { roundSuggestion, withCruiseAltitude } from '../support/tuneApply.ts';
+import type { LevelGrid } from '../../../core/levels.ts';
 
 export type Finding<T> =
   { ok: true; value: T; plan: Plan; ms: number } | { ok: false; message: string; plan: Plan };
@@ -50,7 +51,14 @@ function attempt<T>(plan: Plan, run: (p: Plan) => T): Finding<T> {
   }
 }
 
-export function createTune(store: PlanStore): Tune {
+/**
+ * `levelGrid`: the levels the altitude suggestion snaps to (500 ft where feet are shown,
+ * 100 m otherwise; core/levels.ts).
+ */
+export function createTune(
+  store: PlanStore,
+  levelGrid: () => LevelGrid = () => ({ step: 'm100' }),
+): Tune {
   const speed = shallowRef<Finding<SpeedFinding> | null>(null);
   const altitude = shallowRef<Finding<AltitudeSweepResult> | null>(null);
   const payload = shallowRef<Finding<MaxPayloadResult> | null>(null);
@@ -75,7 +83,8 @@ export function createTune(store: PlanStore): Tune {
         sweep: bestSpeedForLeg(p, legIndex),
       }));
     },
-    runAltitude: () => (altitude.value = attempt(plan(), (p) => bestCruiseAltitude(p))),
+    runAltitude: () =>
+      (altitude.value = attempt(plan(), (p) => bestCruiseAltitude(p, { levels: levelGrid() }))),
     runPayload: () => (payload.value = attempt(plan(), (p) => maxPayload(p))),
     runSensitivity: () => (sensitivity.value = attempt(plan(), (p) => reserveSensitivity(p))),
     applySpeed: () => {
@@ -88,9 +97,11 @@ export function createTune(store: PlanStore): Tune {
       store.setValue(`legs.${index}.speed`, { kind: 'tas', speed_m_s: tas });
     },
     applyAltitude: () => {
-      const best = altitude.value?.ok ? altitude.value.value.best : null;
-      if (!best) return;
-      store.edit(withCruiseAltitude(store.draft.value, roundSuggestion(best.altitude_m, 1)));
+      const found = altitude.value?.ok ? altitude.value.value : null;
+      if (!found?.best) return;
+      // The level people fly (exact: 6000 ft is 1828.8 m), else the optimum to 1 m.
+      const h = found.level ? found.level.altitude_m : roundSuggestion(found.best.altitude_m, 1);
+      store.edit(withCruiseAltitude(store.draft.value, h));
     },
     applyPayload: () => {
       const f = payload.value;

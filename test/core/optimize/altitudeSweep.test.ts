@@ -111,3 +111,30 @@ describe('bestCruiseAltitude', () => {
     expect(() => bestCruiseAltitude(propCruiseByFuel(50))).toThrow(InputError);
   });
 });
+
+describe('bestCruiseAltitude snapped to levels people fly', () => {
+  // 500 ft steps and 100 m steps (common practice); ft = 0.3048 m exactly.
+  const FT = 0.3048;
+  it('the suggested level is on the grid, next to the optimum, and no worse than its neighbour', () => {
+    const plan = mission('prop', 500_000);
+    const r = bestCruiseAltitude(plan, { points: 9, levels: { step: 'ft500' } });
+    expect(r.best).not.toBeNull();
+    const level = r.level!;
+    expect(level).not.toBeNull();
+    const ft = level.altitude_m / FT;
+    expect(Math.abs(ft / 500 - Math.round(ft / 500))).toBeLessThan(1e-9);
+    expect(Math.abs(level.altitude_m - r.best!.altitude_m)).toBeLessThan(500 * FT);
+    // The optimum is the best continuous altitude: a level never beats it (beyond solver noise).
+    expect(level.remaining).toBeLessThanOrEqual(r.best!.remaining * (1 + 1e-9));
+    // Solving the plan at the level gives the remainder reported (consistency, relative 1e-9).
+    (plan.legs[1] as { toAltitude_m: number }).toAltitude_m = level.altitude_m;
+    const solved = solvePlan(plan).landing.remaining;
+    expect(Math.abs(solved - level.remaining) / solved).toBeLessThan(1e-9);
+  });
+
+  it('100 m steps land on whole hundreds of metres; no levels option, no level field', () => {
+    const r = bestCruiseAltitude(mission('prop', 500_000), { points: 9, levels: { step: 'm100' } });
+    expect(r.level!.altitude_m % 100).toBe(0);
+    expect('level' in bestCruiseAltitude(mission('prop', 500_000), { points: 5 })).toBe(false);
+  });
+});
