@@ -43,7 +43,8 @@ Commands
   A plan named "-" is read from standard input.
 
 Options
-  --units si|aviation  units for printed values (default si; aviation = ft, NM, kt, lb)
+  --units si|aviation|uav  units for printed values (default si; aviation = ft, NM, kt, lb;
+                       uav = m, km, m/s, wind in kt, kg, Wh)
   --json               machine-readable output (solve, tune, check); errors are JSON too
   --csv                per-leg table as CSV (solve)
   --monte-carlo        solve: also simulate the flight many times with uncertain wind,
@@ -229,8 +230,8 @@ function outputOptions(
 ): OutputOptions | string {
   const json = values.json === true;
   const units = (values.units as string | undefined) ?? 'si';
-  if (units !== 'si' && units !== 'aviation') {
-    return `--units: "${units}" — must be "si" or "aviation"`;
+  if (units !== 'si' && units !== 'aviation' && units !== 'uav') {
+    return `--units: "${units}" — must be "si", "aviation" or "uav"`;
   }
   if (values.csv && (json || command !== 'solve')) {
     return '--csv: only with solve, and not together with --json';

@@ -30,6 +30,7 @@ import type { Column } from './table.ts';
 const SYSTEM_NAMES: Record<UnitSystemId, string> = {
   si: 'SI (m, km, m/s, kg)',
   aviation: 'aviation (ft, NM, kt, lb)',
+  uav: 'small UAV (m, km, m/s, wind kt, kg, Wh)',
 };
 
 /** The consumable's quantity: fuel mass, or battery energy. */

@@ -8,8 +8,8 @@
  * reports and UI. A value that is not finite prints as "—", never as NaN or Infinity.
  */
 import { flightLevelOf, flightLevelText, type FlightLevelRule } from './levels.ts';
-import { fromSI, UNIT_SYSTEMS, UNITS } from './units.ts';
-import type { Quantity, UnitId, UnitSystemId } from './units.ts';
+import { fromSI, unitMap, UNITS } from './units.ts';
+import type { Quantity, UnitId, UnitSystem } from './units.ts';
 
 /** Printed in place of a value that is missing or not a finite number. */
 export const NO_VALUE = '—';
@@ -59,6 +59,7 @@ function resolution(quantity: Quantity, unit: UnitId, value: number): Resolution
       return { decimals: unit === 'kN' ? 1 : 0 };
     case 'airspeed':
     case 'groundSpeed':
+    case 'windSpeed':
       return { decimals: unit === 'm_s' ? 1 : 0 };
     case 'verticalSpeed':
       return unit === 'ft_min' ? { step: 10, decimals: 0 } : { decimals: 1 };
@@ -111,17 +112,17 @@ export function formatSignificant(value: number, sig = 3): string {
 }
 
 /** The unit a quantity is shown in. */
-export function displayUnitOf(quantity: Quantity, system: UnitSystemId, unit?: UnitId): UnitId {
-  return unit ?? UNIT_SYSTEMS[system][quantity];
+export function displayUnitOf(quantity: Quantity, system: UnitSystem, unit?: UnitId): UnitId {
+  return unit ?? unitMap(system)[quantity];
 }
 
 /** The unit's label as printed, e.g. `NM`, `kt`, `m²`. */
-export function unitLabel(quantity: Quantity, system: UnitSystemId, unit?: UnitId): string {
+export function unitLabel(quantity: Quantity, system: UnitSystem, unit?: UnitId): string {
   return UNITS[displayUnitOf(quantity, system, unit)].label;
 }
 
 /** The value in its display unit, rounded to the display resolution, with its decimals. */
-function rounded(value_si: number, quantity: Quantity, system: UnitSystemId, opts: FormatOptions) {
+function rounded(value_si: number, quantity: Quantity, system: UnitSystem, opts: FormatOptions) {
   const unit = displayUnitOf(quantity, system, opts.unit);
   const v = fromSI(value_si, unit);
   const res = resolution(quantity, unit, v);
@@ -135,7 +136,7 @@ function rounded(value_si: number, quantity: Quantity, system: UnitSystemId, opt
 export function displayValue(
   value_si: number,
   quantity: Quantity,
-  system: UnitSystemId,
+  system: UnitSystem,
   opts: FormatOptions = {},
 ): number {
   if (!Number.isFinite(value_si)) return Number.NaN;
@@ -147,7 +148,7 @@ export function displayValue(
 export function formatQuantity(
   value_si: number,
   quantity: Quantity,
-  system: UnitSystemId,
+  system: UnitSystem,
   opts: FormatOptions = {},
 ): string {
   if (!Number.isFinite(value_si)) return NO_VALUE;
@@ -201,7 +202,7 @@ export function formatDuration(
 }
 
 /** ISA deviation as pilots write it: "ISA +5 °C", "ISA -10 °C", "ISA +0 °C". */
-export function formatIsaDeviation(delta_K: number, system: UnitSystemId, unit?: UnitId): string {
+export function formatIsaDeviation(delta_K: number, system: UnitSystem, unit?: UnitId): string {
   if (!Number.isFinite(delta_K)) return `ISA ${NO_VALUE}`;
   return `ISA ${formatQuantity(delta_K, 'temperatureDelta', system, unit ? { unit } : {})}`;
 }

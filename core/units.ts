@@ -198,6 +198,7 @@ export type Quantity =
   | 'shortDistance'
   | 'airspeed'
   | 'groundSpeed'
+  | 'windSpeed'
   | 'verticalSpeed'
   | 'mass'
   | 'fuelMass'
@@ -220,7 +221,14 @@ export type Quantity =
   | 'angle'
   | 'ratio';
 
-export type UnitSystemId = 'si' | 'aviation';
+/** The named presets. */
+export type UnitSystemId = 'si' | 'aviation' | 'uav';
+
+/** A display unit for every quantity. */
+export type UnitMap = Readonly<Record<Quantity, UnitId>>;
+
+/** What values are shown in: a preset, or a unit chosen per quantity. */
+export type UnitSystem = UnitSystemId | UnitMap;
 
 export const UNIT_SYSTEMS: Readonly<Record<UnitSystemId, Readonly<Record<Quantity, UnitId>>>> = {
   si: {
@@ -229,6 +237,7 @@ export const UNIT_SYSTEMS: Readonly<Record<UnitSystemId, Readonly<Record<Quantit
     shortDistance: 'm',
     airspeed: 'm_s',
     groundSpeed: 'm_s',
+    windSpeed: 'm_s',
     verticalSpeed: 'm_s',
     mass: 'kg',
     fuelMass: 'kg',
@@ -258,6 +267,7 @@ export const UNIT_SYSTEMS: Readonly<Record<UnitSystemId, Readonly<Record<Quantit
     shortDistance: 'ft',
     airspeed: 'kt',
     groundSpeed: 'kt',
+    windSpeed: 'kt',
     verticalSpeed: 'ft_min',
     mass: 'lb',
     fuelMass: 'lb',
@@ -280,11 +290,47 @@ export const UNIT_SYSTEMS: Readonly<Record<UnitSystemId, Readonly<Record<Quantit
     angle: 'deg',
     ratio: 'percent',
   },
+  // Small UAV operators: metres and kilograms, airspeed in m/s, battery energy in Wh and
+  // motor power in W, but wind in knots as forecasts give it (common practice).
+  uav: {
+    altitude: 'm',
+    distance: 'km',
+    shortDistance: 'm',
+    airspeed: 'm_s',
+    groundSpeed: 'm_s',
+    windSpeed: 'kt',
+    verticalSpeed: 'm_s',
+    mass: 'kg',
+    fuelMass: 'kg',
+    fuelVolume: 'L',
+    fuelDensity: 'kg_L',
+    airDensity: 'kg_m3',
+    energy: 'Wh',
+    power: 'W',
+    thrust: 'N',
+    time: 'min',
+    temperature: 'degC',
+    temperatureDelta: 'degC_delta',
+    pressure: 'hPa',
+    area: 'm2',
+    tsfc: 'g_kNs',
+    bsfc: 'g_kWh',
+    specificEnergy: 'Wh_kg',
+    charge: 'Ah',
+    voltage: 'V',
+    angle: 'deg',
+    ratio: 'percent',
+  },
 };
 
+/** The unit for every quantity in a preset or a per-quantity choice. */
+export function unitMap(system: UnitSystem): UnitMap {
+  return typeof system === 'string' ? UNIT_SYSTEMS[system] : system;
+}
+
 /** The display unit for a quantity in a unit system. */
-export function displayUnit(system: UnitSystemId, quantity: Quantity): UnitId {
-  return UNIT_SYSTEMS[system][quantity];
+export function displayUnit(system: UnitSystem, quantity: Quantity): UnitId {
+  return unitMap(system)[quantity];
 }
 
 // --- Fuel densities ----------------------------------------------------------------------

@@ -8,7 +8,7 @@
  */
 import { DEFAULT_SCREEN_HEIGHT_M } from '../field/takeoff.ts';
 import { formatQuantity, formatSignificant, type FormatOptions } from '../format.ts';
-import type { Quantity, UnitSystemId } from '../units.ts';
+import type { Quantity, UnitSystem } from '../units.ts';
 import type { Check, ReserveProblem } from './types.ts';
 
 /** Beyond this relative margin (±999 %) a margin reads as a multiple ("> 10×"). */
@@ -23,7 +23,7 @@ export function minutesText(seconds: number): string {
 }
 
 /** Why a reserve cannot be flown, in the reader's units. */
-export function describeReserveProblem(p: ReserveProblem, system: UnitSystemId): string {
+export function describeReserveProblem(p: ReserveProblem, system: UnitSystem): string {
   const what = p.part === 'hold' ? 'final reserve' : 'alternate';
   const alt = (h: number) => formatQuantity(h, 'altitude', system);
   switch (p.why) {
@@ -46,7 +46,7 @@ export function describeReserveProblem(p: ReserveProblem, system: UnitSystemId):
  * beyond ±999 % a multiple ("> 10×"); for a speed the planner chose and for checks that are
  * yes-or-no (leg order, a reserve that cannot be flown) no figure at all.
  */
-export function describeMargin(check: Check, system: UnitSystemId): string {
+export function describeMargin(check: Check, system: UnitSystem): string {
   if (check.chosenSpeed) return check.chosenSpeed.atStallMargin ? 'at floor' : 'chosen';
   if (check.id === 'shape:order' || check.id === 'shape:flight') return '—';
   if (check.reserveProblems !== undefined && check.reserveProblems.length > 0) return '—';
@@ -89,7 +89,7 @@ export function checkDisplayQuantity(check: Check): Quantity | null {
 }
 
 /** A check's value or limit in the unit system (ratios as plain numbers, 3 digits). */
-export function checkAmount(check: Check, v: number, system: UnitSystemId): string {
+export function checkAmount(check: Check, v: number, system: UnitSystem): string {
   const q = checkDisplayQuantity(check);
   return q === null ? formatSignificant(v, 3) : formatQuantity(v, q, system);
 }
@@ -98,7 +98,7 @@ export function checkAmount(check: Check, v: number, system: UnitSystemId): stri
  * A check's value and limit as shown: a jet's power check as thrust (lbf or kN), every other
  * check as `checkAmount` gives them.
  */
-export function checkFigures(check: Check, system: UnitSystemId): { value: string; limit: string } {
+export function checkFigures(check: Check, system: UnitSystem): { value: string; limit: string } {
   // Yes-or-no shape checks: a count of legs out of order against none allowed.
   if (check.id === 'shape:order') {
     return { value: `${check.value} out of order`, limit: 'none' };
@@ -120,7 +120,7 @@ export function checkFigures(check: Check, system: UnitSystemId): { value: strin
   };
 }
 
-export function describeCheck(check: Check, system: UnitSystemId): string {
+export function describeCheck(check: Check, system: UnitSystem): string {
   const a = (v: number) => checkAmount(check, v, system);
   const { value, limit } = checkFigures(check, system);
   const kind = check.id.split(':')[0];

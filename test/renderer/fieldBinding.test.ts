@@ -9,10 +9,11 @@ import { assignIssues, limitInUnit, shortMessage } from '../../renderer/src/supp
 import { getAtPath, setAtPath } from '../../renderer/src/support/paths.ts';
 
 describe('typed numbers', () => {
-  it('reads plain decimals, a decimal comma and exponents; refuses the rest', () => {
+  it('reads plain decimals and exponents without a locale; refuses the rest', () => {
     // Values below are the typed text itself (no conversion involved).
     expect(parseNumberText(' 12.5 ')).toEqual({ ok: true, value: 12.5 });
-    expect(parseNumberText('12,5')).toEqual({ ok: true, value: 12.5 });
+    // Without a locale a comma is refused, never guessed as a decimal mark (issue 11).
+    expect(parseNumberText('12,5').ok).toBe(false);
     expect(parseNumberText('-3e2')).toEqual({ ok: true, value: -300 });
     expect(parseNumberText('1 200')).toEqual({ ok: true, value: 1200 });
     expect(parseNumberText('').ok).toBe(false);
@@ -21,7 +22,7 @@ describe('typed numbers', () => {
     expect(Number.isNaN(storedFromText('abc', 'ft', 'm'))).toBe(true);
   });
 
-  it('shows stored values in the display unit with 5 significant digits', () => {
+  it('shows stored values in the display unit, exactly where they are exact', () => {
     // 4500 m = 14763.78 ft (NIST SP 811: ft = 0.3048 m); 5 significant digits shown.
     expect(editableText(4500, 'm', 'ft')).toBe('14764');
     // 0.8 as a percentage (exact).

@@ -1,8 +1,15 @@
 /**
- * One number box bound to a plan path: shows the stored value in the display unit, keeps the
- * person's own digits while they stand for the value, writes every keystroke (NaN for text
- * that is not a number, so the plan check names the field) and restates limits in the
- * unit shown. Shared by the labelled field and the table cell.
+ * One number box bound to a plan path. Input integrity rules (issue 11, DEVELOPERS.md):
+ * - the text is the person's: it is never rewritten while it stands for the stored value
+ *   (only undo, a unit or locale switch, or an edit elsewhere that changes the value
+ *   refreshes it, and then with the text they typed for that value when there is one);
+ * - every keystroke goes to the plan at once: text that reads as a number by the locale's
+ *   rule (renderer/src/support/numberText.ts) is converted with the exact factors at full
+ *   precision; text that does not becomes NaN, so the plan check names the field, the
+ *   result goes stale and nothing is saved — the text and its message stay until fixed;
+ * - validity and how ambiguous text was read are shown beside the box, never by opening,
+ *   closing or moving anything.
+ * Shared by the labelled field and the table cell.
  */
 import { computed, ref, watch, type ComputedRef, type Ref } from 'vue';
 import { usePlan } from './usePlan.ts';
@@ -16,12 +23,15 @@ import {
 } from '../support/fieldBinding.ts';
 import { limitInUnit } from '../support/issues.ts';
 import { getAtPath, splitPath } from '../support/paths.ts';
+import { typedTexts } from '../support/typedText.ts';
 
 export interface NumberInput {
   id: ComputedRef<string>;
   text: Ref<string>;
   unitLabel: ComputedRef<string>;
   message: ComputedRef<string | null>;
+  /** How the text was read when another locale would read it differently. */
+  note: ComputedRef<string | null>;
   onInput(event: Event): void;
   seal(): void;
 }
@@ -47,30 +57,42 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
     const q = def().quantity;
     return q ? units.unitLabel(q) : '';
   });
+  const reading = computed(() => units.reading(def().quantity ?? null));
   const textFor = (v: number | undefined) => {
     const d = def();
-    return v === undefined
-      ? ''
-      : editableText(v, d.stored, shownUnit.value, d.quantity ?? d.digits ?? null);
+    if (v === undefined) return '';
+    const typed = typedTexts.lookup(d.path, v, shownUnit.value, reading.value.style.locale);
+    if (typed !== undefined) return typed;
+    return editableText(
+      v,
+      d.stored,
+      shownUnit.value,
+      d.quantity ?? d.digits ?? null,
+      reading.value.style,
+    );
   };
   const text = ref(textFor(stored.value));
 
-  // Refresh the box only when the plan changed underneath it (undo, unit switch, a suggestion
-  // applied), never while it still stands for the value — the person's own digits stay.
-  watch([stored, shownUnit], () => {
+  // Refresh the box only when the plan changed underneath it (undo, unit or locale switch, a
+  // suggestion applied), never while it still stands for the value — the person's own text stays.
+  watch([stored, shownUnit, reading], () => {
     const v = stored.value;
     const same =
       v === undefined
         ? text.value.trim() === ''
-        : textShowsValue(text.value, v, def().stored, shownUnit.value);
+        : textShowsValue(text.value, v, def().stored, shownUnit.value, reading.value);
     if (!same) text.value = textFor(v);
   });
 
-  const typingError = computed(() => {
-    if (def().optional && text.value.trim() === '') return null;
-    const parsed = parseNumberText(text.value);
-    return parsed.ok ? null : parsed.message;
-  });
+  const parsed = computed(() =>
+    def().optional && text.value.trim() === '' ? null : parseNumberText(text.value, reading.value),
+  );
+  const typingError = computed(() =>
+    parsed.value && !parsed.value.ok ? parsed.value.message : null,
+  );
+  const note = computed(() =>
+    parsed.value && parsed.value.ok ? (parsed.value.note ?? null) : null,
+  );
   const message = computed(() => {
     if (typingError.value) return typingError.value;
     const d = def();
@@ -84,9 +106,26 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
     const value =
       d.optional && text.value.trim() === ''
         ? undefined
-        : storedFromText(text.value, shownUnit.value, d.stored);
+        : storedFromText(text.value, shownUnit.value, d.stored, reading.value);
+    // Remembered when the box is left (the finished text, not every prefix on the way).
+    pending =
+      value === undefined
+        ? null
+        : {
+            stored: value,
+            unit: shownUnit.value,
+            locale: reading.value.style.locale,
+            text: text.value,
+          };
     plan.setValue(d.path, value, d.path, d.block);
   }
 
-  return { id, text, unitLabel, message, onInput, seal: () => plan.seal() };
+  let pending: Parameters<typeof typedTexts.remember>[1] | null = null;
+  function seal(): void {
+    if (pending) typedTexts.remember(def().path, pending);
+    pending = null;
+    plan.seal();
+  }
+
+  return { id, text, unitLabel, message, note, onInput, seal };
 }

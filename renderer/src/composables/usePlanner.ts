@@ -7,7 +7,7 @@ import type { Plan } from '../../../core/plan/schema.ts';
 import type { UnitSystemId } from '../../../core/units.ts';
 import { createPlanStore, PLAN_KEY, type PlanStore } from './usePlan.ts';
 import { createResultStore, RESULT_KEY, type ResultStore } from './useResult.ts';
-import { createUnits, UNITS_KEY, type Units } from './useUnits.ts';
+import { createUnits, UNITS_KEY, type Units, type UnitSettings } from './useUnits.ts';
 import { createTune, TUNE_KEY, type Tune } from './useTune.ts';
 import { CONFIDENCE_KEY, createConfidence, type Confidence } from './useConfidence.ts';
 
@@ -19,7 +19,7 @@ export interface Planner {
   confidence: Confidence;
 }
 
-export function createPlanner(initial: Plan, system: UnitSystemId = 'si'): Planner {
+export function createPlanner(initial: Plan, system: UnitSystemId | UnitSettings = 'si'): Planner {
   const plan = createPlanStore(initial);
   const units = createUnits(system);
   return {

@@ -1,15 +1,18 @@
 /**
- * The unit system the screen shows (SI or aviation). The plan never changes with it:
- * fields convert what they show from the stored SI value and convert what is typed back.
+ * What the screen shows values in: a unit preset (SI, aviation, small UAV) with a unit chosen
+ * per quantity on top, the locale of typed numbers, and the transition altitude above which
+ * altitudes may be typed as flight levels. The plan never changes with any of them: fields
+ * convert what they show from the stored SI value and convert what is typed back.
  * All number text on screen goes through `format` (core/format.ts).
  */
 import { computed, inject, ref, type ComputedRef, type InjectionKey, type Ref } from 'vue';
 import {
   convert,
   UNITS,
-  UNIT_SYSTEMS,
   type Quantity,
   type UnitId,
+  type UnitMap,
+  type UnitSystem,
   type UnitSystemId,
 } from '../../../core/units.ts';
 import {
@@ -18,12 +21,46 @@ import {
   formatSignificant,
   type FormatOptions,
 } from '../../../core/format.ts';
+import { numberStyle, type NumberStyle } from '../support/numberText.ts';
+import type { TextReading } from '../support/fieldBinding.ts';
+import {
+  CHOOSABLE,
+  cleanLocale,
+  cleanOverrides,
+  DEFAULT_TRANSITION_ALTITUDE_FT,
+  effectiveUnits,
+  UNIT_PRESET_NAMES,
+  type UnitOverrides,
+} from '../support/unitSettings.ts';
+
+export { isUnitSystemId } from '../support/unitSettings.ts';
+
+export interface UnitSettings {
+  preset: UnitSystemId;
+  overrides?: UnitOverrides;
+  /** "auto" (the browser's language) or a BCP 47 tag. */
+  locale?: string;
+  transitionAltitude_ft?: number;
+}
 
 export interface Units {
-  readonly system: Ref<UnitSystemId>;
+  /** The preset chosen. */
+  readonly preset: Ref<UnitSystemId>;
+  /** Units chosen per quantity that differ from the preset. */
+  readonly overrides: Ref<UnitOverrides>;
+  /** What core's formatters get: the preset, or the per-quantity map when one is set. */
+  readonly system: ComputedRef<UnitSystem>;
   readonly systemName: ComputedRef<string>;
+  /** Every choosable quantity with its unit, for the report header ("altitude ft, …"). */
+  readonly unitsInWords: ComputedRef<string>;
+  /** "auto" or a BCP 47 tag; `numberStyle` holds the marks it stands for. */
+  readonly locale: Ref<string>;
+  readonly numberStyle: ComputedRef<NumberStyle>;
+  readonly transitionAltitude_ft: Ref<number>;
   unitFor(quantity: Quantity): UnitId;
   unitLabel(quantity: Quantity): string;
+  /** How a box showing `quantity` reads typed text. */
+  reading(quantity: Quantity | null): TextReading;
   /** A stored value (in `stored`) as a number in the display unit of `quantity`. */
   toDisplay(value: number, stored: UnitId, quantity: Quantity): number;
   /** A number in the display unit of `quantity` back into `stored`. */
@@ -34,33 +71,69 @@ export interface Units {
   value(value_si: number, quantity: Quantity, opts?: FormatOptions): number;
   /** A plain coefficient (CL, L/D) to `sig` significant digits. */
   plain(value: number, sig?: number): string;
+  /** Chooses a preset; per-quantity choices are cleared. */
   setSystem(system: UnitSystemId): void;
+  /** Chooses the unit of one quantity (the preset's unit clears the choice). */
+  setUnit(quantity: Quantity, unit: UnitId): void;
 }
 
-export const UNIT_SYSTEM_NAMES: Readonly<Record<UnitSystemId, string>> = {
-  si: 'SI',
-  aviation: 'Aviation (ft, kt, NM, lb, US gal)',
-};
+/** The preset names (kept under their old name for callers). */
+export const UNIT_SYSTEM_NAMES = UNIT_PRESET_NAMES;
 
-export function isUnitSystemId(value: unknown): value is UnitSystemId {
-  return value === 'si' || value === 'aviation';
+function browserLocale(): string {
+  return typeof navigator !== 'undefined' && navigator.language ? navigator.language : 'en-US';
 }
 
-export function createUnits(initial: UnitSystemId = 'si'): Units {
-  const system = ref<UnitSystemId>(initial);
-  const unitFor = (q: Quantity): UnitId => UNIT_SYSTEMS[system.value][q];
+export function createUnits(initial: UnitSystemId | UnitSettings = 'si'): Units {
+  const settings: UnitSettings = typeof initial === 'string' ? { preset: initial } : initial;
+  const preset = ref<UnitSystemId>(settings.preset);
+  const overrides = ref<UnitOverrides>(cleanOverrides(settings.preset, settings.overrides));
+  const locale = ref(cleanLocale(settings.locale));
+  const transitionAltitude_ft = ref(
+    settings.transitionAltitude_ft ?? DEFAULT_TRANSITION_ALTITUDE_FT,
+  );
+  const map = computed<UnitMap>(() => effectiveUnits(preset.value, overrides.value));
+  const system = computed<UnitSystem>(() =>
+    Object.keys(overrides.value).length === 0 ? preset.value : map.value,
+  );
+  const style = computed(() =>
+    numberStyle(locale.value === 'auto' ? browserLocale() : locale.value),
+  );
+  const unitFor = (q: Quantity): UnitId => map.value[q];
   return {
+    preset,
+    overrides,
     system,
-    systemName: computed(() => UNIT_SYSTEM_NAMES[system.value]),
+    systemName: computed(() =>
+      Object.keys(overrides.value).length === 0
+        ? UNIT_PRESET_NAMES[preset.value]
+        : `${UNIT_PRESET_NAMES[preset.value]}, own choices`,
+    ),
+    unitsInWords: computed(() =>
+      CHOOSABLE.map((c) => `${c.label.toLowerCase()} ${UNITS[map.value[c.quantity]].label}`).join(
+        ', ',
+      ),
+    ),
+    locale,
+    numberStyle: style,
+    transitionAltitude_ft,
     unitFor,
     unitLabel: (q) => UNITS[unitFor(q)].label,
+    reading: (q) =>
+      q === 'altitude'
+        ? { style: style.value, flightLevelsAbove_ft: transitionAltitude_ft.value }
+        : { style: style.value },
     toDisplay: (value, stored, q) => convert(value, stored, unitFor(q)),
     fromDisplay: (value, stored, q) => convert(value, unitFor(q), stored),
     format: (v, q, opts) => formatQuantity(v, q, system.value, opts),
     value: (v, q, opts) => displayValue(v, q, system.value, opts),
     plain: (v, sig = 3) => formatSignificant(v, sig),
     setSystem: (s) => {
-      system.value = s;
+      preset.value = s;
+      overrides.value = {};
+    },
+    setUnit: (q, unit) => {
+      overrides.value = cleanOverrides(preset.value, { ...overrides.value, [q]: unit });
     },
   };
 }

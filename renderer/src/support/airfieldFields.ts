@@ -93,7 +93,7 @@ function runwayFields(plan: Plan, p: string, end: Runway | undefined): FieldDef[
     ...wind.fields,
     ...(wind.own
       ? [
-          num(`${p}.surfaceWind.speed_m_s`, 'Surface wind speed', 'airspeed', 'm_s'),
+          num(`${p}.surfaceWind.speed_m_s`, 'Surface wind speed', 'windSpeed', 'm_s'),
           num(`${p}.surfaceWind.from_deg`, 'Surface wind from', 'angle', 'deg', {
             hint: 'same north as the runway direction',
           }),
@@ -134,7 +134,7 @@ function endFields(plan: Plan, end: End): FieldDef[] {
       pick,
       num(`${p}.releaseSpeed_m_s`, 'Release ground speed', 'airspeed', 'm_s'),
       ...wind.fields,
-      ...(wind.own ? [num(`${p}.headwind_m_s`, 'Headwind at launch', 'airspeed', 'm_s')] : []),
+      ...(wind.own ? [num(`${p}.headwind_m_s`, 'Headwind at launch', 'windSpeed', 'm_s')] : []),
       num(`${p}.catapultStroke_m`, 'Catapult stroke', 'shortDistance', 'm', {
         optional: true,
         hint: 'optional',

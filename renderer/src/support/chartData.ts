@@ -9,11 +9,11 @@ import type { PowerCurves } from '../../../core/optimize/curves.ts';
 import type { PayloadRangePoint } from '../../../core/optimize/payloadRange.ts';
 import { dragCoefficient, liftToDrag, polarCoefficients } from '../../../core/polar.ts';
 import { displayValue } from '../../../core/format.ts';
-import { UNITS, UNIT_SYSTEMS, type Quantity, type UnitSystemId } from '../../../core/units.ts';
+import { UNITS, unitMap, type Quantity, type UnitSystem } from '../../../core/units.ts';
 import { horizontalMark, verticalMark, type ChartSpec, type Series, type XY } from './chartSpec.ts';
 import type { BandPoint } from './confidence.ts';
 
-const label = (q: Quantity, system: UnitSystemId) => UNITS[UNIT_SYSTEMS[system][q]].label;
+const label = (q: Quantity, system: UnitSystem) => UNITS[unitMap(system)[q]].label;
 
 export type ProfileAxis = 'distance' | 'time';
 
@@ -24,7 +24,7 @@ export type ProfileAxis = 'distance' | 'time';
 export function profileChart(
   result: PlanResult,
   axis: ProfileAxis,
-  system: UnitSystemId,
+  system: UnitSystem,
   band: readonly BandPoint[] = [],
 ): ChartSpec {
   const battery = result.consumable === 'battery';
@@ -141,7 +141,7 @@ export function polarChart(plan: Plan, result: PlanResult | null): ChartSpec {
 export type PowerView = 'power' | 'thrust';
 
 /** Power (or thrust) required and available across TAS, stall and optimum speeds marked. */
-export function powerChart(curves: PowerCurves, view: PowerView, system: UnitSystemId): ChartSpec {
+export function powerChart(curves: PowerCurves, view: PowerView, system: UnitSystem): ChartSpec {
   const v = (tas: number) => displayValue(tas, 'airspeed', system, { decimals: 2 });
   const y = (value: number) =>
     view === 'power'
@@ -182,7 +182,7 @@ export function powerChart(curves: PowerCurves, view: PowerView, system: UnitSys
 export function payloadRangeChart(
   points: readonly PayloadRangePoint[],
   plan: Plan,
-  system: UnitSystemId,
+  system: UnitSystem,
 ): ChartSpec {
   const xy = points.map((p) => ({
     x: displayValue(p.range_m, 'distance', system, { decimals: 2 }),

@@ -52,7 +52,7 @@ export function uncertaintyFields(plan: Plan): FieldDef[] {
     unit: Parameters<typeof num>[3],
   ) => num(`${p}.${key}`, label, q, unit, { block });
   return [
-    f('windSpeed_m_s', 'Wind speed, per leg', 'airspeed', 'm_s'),
+    f('windSpeed_m_s', 'Wind speed, per leg', 'windSpeed', 'm_s'),
     f('windDirection_deg', 'Wind direction, per leg', 'angle', 'deg'),
     num(`${p}.windCorrelation`, 'Wind error correlation between legs', null, 'fraction', {
       block,

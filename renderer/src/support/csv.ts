@@ -7,7 +7,7 @@
 import type { Plan } from '../../../core/plan/schema.ts';
 import type { LegResult, PlanResult } from '../../../core/solver/types.ts';
 import { displayValue, formatSignificant } from '../../../core/format.ts';
-import { UNITS, UNIT_SYSTEMS, type Quantity, type UnitSystemId } from '../../../core/units.ts';
+import { UNITS, unitMap, type Quantity, type UnitSystem } from '../../../core/units.ts';
 import { legTitle } from './legLabels.ts';
 
 export function csvCell(value: string | number): string {
@@ -27,7 +27,7 @@ interface Column {
   total?: (result: PlanResult) => string | number;
 }
 
-function columns(plan: Plan, result: PlanResult, system: UnitSystemId): Column[] {
+function columns(plan: Plan, result: PlanResult, system: UnitSystem): Column[] {
   const v = (x: number, q: Quantity) => displayValue(x, q, system);
   const battery = result.consumable === 'battery';
   const used: Column = battery
@@ -108,10 +108,10 @@ function columns(plan: Plan, result: PlanResult, system: UnitSystemId): Column[]
 }
 
 /** CSV text of the leg table with a totals row, values in `system`'s display units. */
-export function buildLegCsv(plan: Plan, result: PlanResult, system: UnitSystemId): string {
+export function buildLegCsv(plan: Plan, result: PlanResult, system: UnitSystem): string {
   const cols = columns(plan, result, system);
   const header = cols.map((c) => {
-    const label = c.quantity ? UNITS[UNIT_SYSTEMS[system][c.quantity]].label : '';
+    const label = c.quantity ? UNITS[unitMap(system)[c.quantity]].label : '';
     return label ? `${c.title} (${label})` : c.title;
   });
   const rows = result.legs.map((leg, i) => cols.map((c) => c.leg(leg, i)));

@@ -1,9 +1,10 @@
 /**
  * Between what a person types in a number box and the SI value in the plan.
  * The plan holds the value in its stored unit (the unit named in its key); the box shows
- * it in the display unit of the chosen unit system. Text that does not parse is kept in
- * the box and becomes NaN in the plan, so the plan check names the field and the result
- * goes stale instead of the keystroke being thrown away.
+ * it in the display unit of the chosen unit system, with the decimal mark of the person's
+ * locale. Text that does not parse is kept in the box and becomes NaN in the plan, so the
+ * plan check names the field and the result goes stale instead of the keystroke being
+ * thrown away.
  */
 import {
   formatNumber,
@@ -12,35 +13,49 @@ import {
   significantDecimals,
 } from '../../../core/format.ts';
 import { convert, toSI, type Quantity, type UnitId } from '../../../core/units.ts';
+import {
+  localNumber,
+  PLAIN_STYLE,
+  readNumber,
+  type NumberReading,
+  type NumberStyle,
+} from './numberText.ts';
 
-export type FieldParse = { ok: true; value: number } | { ok: false; message: string };
+export type FieldParse = NumberReading;
 
-const NUMBER_TEXT = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
-
-/**
- * Reads a typed number: spaces and thin spaces are ignored, a lone comma counts as the
- * decimal point (common in much of Europe), anything else must be a plain decimal number.
- */
-export function parseNumberText(text: string): FieldParse {
-  let t = text.replace(/[\s\u202f\u00a0]/g, '');
-  if (t === '') return { ok: false, message: 'enter a number' };
-  if (!t.includes('.') && /^[+-]?\d*,\d+$/.test(t)) t = t.replace(',', '.');
-  if (!NUMBER_TEXT.test(t)) return { ok: false, message: `"${text.trim()}" is not a number` };
-  const value = Number(t);
-  if (!Number.isFinite(value)) return { ok: false, message: 'number too large' };
-  return { ok: true, value };
+/** How a box reads text: the locale's marks, and flight levels where the field allows them. */
+export interface TextReading {
+  readonly style: NumberStyle;
+  /** Altitude fields accept "FL350" above this transition altitude (feet). */
+  readonly flightLevelsAbove_ft?: number;
 }
 
-/** Typed text in `displayUnit` → value in `storedUnit`; NaN when the text is not a number. */
-export function storedFromText(text: string, displayUnit: UnitId, storedUnit: UnitId): number {
-  const parsed = parseNumberText(text);
+export const PLAIN_READING: TextReading = { style: PLAIN_STYLE };
+
+/** Reads a typed number by the rule of `reading` (renderer/src/support/numberText.ts). */
+export function parseNumberText(text: string, reading: TextReading = PLAIN_READING): FieldParse {
+  return readNumber(text, reading.style, { flightLevelsAbove_ft: reading.flightLevelsAbove_ft });
+}
+
+/**
+ * Typed text in `displayUnit` → value in `storedUnit` at full precision (exact factors,
+ * core/units.ts); NaN when the text is not a number. A flight level is feet, whatever the
+ * box shows.
+ */
+export function storedFromText(
+  text: string,
+  displayUnit: UnitId,
+  storedUnit: UnitId,
+  reading: TextReading = PLAIN_READING,
+): number {
+  const parsed = parseNumberText(text, reading);
   if (!parsed.ok) return Number.NaN;
-  return convert(parsed.value, displayUnit, storedUnit);
+  return convert(parsed.value, parsed.unit ?? displayUnit, storedUnit);
 }
 
 /**
  * The text an input box shows for a stored value. A value the box can show exactly in at
- * most 6 significant digits (4500 m, 1013.25 hPa, 80 %) is shown exactly. Anything else is a
+ * most 9 significant digits (8000 ft from 2438.4 m, 1013.25 hPa, 80 %) is shown exactly. Anything else is a
  * conversion that does not come out round (95 kg = 209.4357 lb): it is shown rounded to the
  * display resolution of its quantity (core/format.ts, the same as the results), with up to
  * one more place where that leaves fewer than 3 significant digits — or, without a quantity,
@@ -52,10 +67,29 @@ export function editableText(
   storedUnit: UnitId,
   displayUnit: UnitId,
   quantityOrSignificant: Quantity | null | number = null,
+  style: NumberStyle = PLAIN_STYLE,
 ): string {
   if (!Number.isFinite(stored)) return '';
   const shown = convert(stored, storedUnit, displayUnit);
-  const exact = exactText(shown, 6);
+  return localNumber(
+    plainEditable(shown, stored, storedUnit, displayUnit, quantityOrSignificant),
+    style,
+  );
+}
+
+function plainEditable(
+  shown: number,
+  stored: number,
+  storedUnit: UnitId,
+  displayUnit: UnitId,
+  quantityOrSignificant: Quantity | null | number,
+): string {
+  const exact = exactText(
+    shown,
+    9,
+    (text) => convert(Number(text), displayUnit, storedUnit),
+    stored,
+  );
   if (exact !== null) return exact;
   if (typeof quantityOrSignificant === 'number') return plainNumber(shown, quantityOrSignificant);
   if (quantityOrSignificant === null) return plainNumber(shown, 5);
@@ -65,13 +99,28 @@ export function editableText(
   return trimZeros(formatNumber(shown, decimals));
 }
 
-/** The shortest text of at most `maxSignificant` digits that stands for `value` exactly, or null. */
-function exactText(value: number, maxSignificant: number): string | null {
+/**
+ * The shortest text of at most `maxSignificant` digits that stands for the stored value
+ * exactly (read back and converted, it matches to the rounding noise of an exact-factor
+ * conversion, 1e-12 relative to the stored value — so °F near 0 compares in kelvin), or
+ * null. 8000 ft stored as 2438.4 m shows as 8000 ft again; 95 kg (209.43570… lb) is not
+ * exact and is rounded.
+ */
+function exactText(
+  shown: number,
+  maxSignificant: number,
+  back: (text: string) => number,
+  stored: number,
+): string | null {
+  if (shown === 0) return '0';
   for (let sig = 1; sig <= maxSignificant; sig++) {
-    const text = plainNumber(value, sig);
-    const back = Number(text);
-    const scale = Math.max(Math.abs(value), Number.MIN_VALUE);
-    if (Math.abs(back - value) / scale < 1e-9) return text;
+    const text = plainNumber(shown, sig);
+    if (text === '') return null;
+    const error =
+      stored !== 0
+        ? Math.abs(back(text) - stored) / Math.abs(stored)
+        : Math.abs(Number(text) - shown) / Math.abs(shown);
+    if (error < 1e-12) return text;
   }
   return null;
 }
@@ -111,8 +160,9 @@ export function textShowsValue(
   stored: number,
   storedUnit: UnitId,
   displayUnit: UnitId,
+  reading: TextReading = PLAIN_READING,
 ): boolean {
-  const fromText = storedFromText(text, displayUnit, storedUnit);
+  const fromText = storedFromText(text, displayUnit, storedUnit, reading);
   if (Number.isNaN(fromText) || Number.isNaN(stored))
     return Number.isNaN(fromText) && Number.isNaN(stored);
   const scale = Math.max(Math.abs(stored), Math.abs(fromText), Number.MIN_VALUE);

@@ -108,7 +108,7 @@ function trackFields(
   const source = leg.windSource ?? absent;
   if (source === 'leg')
     fields.push(
-      num(`${p}.wind.speed_m_s`, 'Wind speed', 'airspeed', 'm_s'),
+      num(`${p}.wind.speed_m_s`, 'Wind speed', 'windSpeed', 'm_s'),
       num(`${p}.wind.from_deg`, 'Wind from (° true)', 'angle', 'deg'),
     );
   return fields;

@@ -9,11 +9,11 @@ import {
   describeReserveProblem,
   minutesText,
 } from '../../../core/solver/describe.ts';
-import type { Quantity, UnitSystemId } from '../../../core/units.ts';
+import type { Quantity, UnitSystem } from '../../../core/units.ts';
 import { formatNumber, formatQuantity } from '../../../core/format.ts';
 
 /** "value vs limit" in display units (core/solver/describe.ts: runway lengths in m or ft). */
-export function checkFigures(check: Check, system: UnitSystemId): string {
+export function checkFigures(check: Check, system: UnitSystem): string {
   const { value, limit } = coreCheckFigures(check, system);
   return `${value} vs limit ${limit}`;
 }
@@ -22,7 +22,7 @@ export function checkFigures(check: Check, system: UnitSystemId): string {
  * A check's margin as people read it (core/solver/describe.ts): a percentage, an absolute
  * difference against a zero limit, a multiple beyond ±999 %, or words for a planner-chosen speed.
  */
-export function marginText(check: Check, system: UnitSystemId): string {
+export function marginText(check: Check, system: UnitSystem): string {
   return describeMargin(check, system);
 }
 
@@ -37,7 +37,7 @@ export function marginTitle(check: Check): string {
  * The landing line: what is left and the reserve required, each also in minutes at the final
  * reserve's rule (normal cruise or best endurance), or why the reserve cannot be flown.
  */
-export function landingLine(result: PlanResult, system: UnitSystemId): string {
+export function landingLine(result: PlanResult, system: UnitSystem): string {
   const q: Quantity = result.consumable === 'battery' ? 'energy' : 'fuelMass';
   const r = result.reserve;
   const left = formatQuantity(result.landing.remaining, q, system);

@@ -28,7 +28,7 @@ export function parsePairs(text: string): PairsParse {
       });
       return;
     }
-    const [a, b] = parts.map(parseNumberText);
+    const [a, b] = parts.map((p) => parseNumberText(p));
     if (!a?.ok || !b?.ok) {
       errors.push({ line: i + 1, message: 'CL and CD must be numbers' });
       return;

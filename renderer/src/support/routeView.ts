@@ -12,7 +12,7 @@ import type { CheckState, PlanResult } from '../../../core/solver/types.ts';
 import type { LegRouteTarget } from '../../../core/route/resolveRoute.ts';
 import type { RouteLeg } from '../../../core/route/waypoints.ts';
 import { MEAN_EARTH_RADIUS_M } from '../../../core/route/geodesic.ts';
-import { fromSI, toSI, UNITS, UNIT_SYSTEMS, type UnitSystemId } from '../../../core/units.ts';
+import { fromSI, toSI, UNITS, unitMap, type UnitSystem } from '../../../core/units.ts';
 
 export type SegmentState = CheckState | 'notReached';
 
@@ -96,7 +96,7 @@ export function routeView(
   plan: Plan,
   targets: readonly (LegRouteTarget | undefined)[],
   result: PlanResult | null,
-  system: UnitSystemId,
+  system: UnitSystem,
   size: { width: number; height: number; pad: number },
 ): RouteView | null {
   const waypoints = plan.route?.waypoints ?? [];
@@ -129,7 +129,7 @@ export function routeView(
     const state = runState(result, legIndices);
     return [{ legIndices, geodesic: target.leg, x1: a.x, y1: a.y, x2: b.x, y2: b.y, state }];
   });
-  const unit = UNIT_SYSTEMS[system].distance;
+  const unit = unitMap(system).distance;
   const nice = niceLength(fromSI((0.25 * size.width) / scale, unit));
   return {
     width: size.width,

@@ -19,7 +19,7 @@ export function windLevelFields(i: number): FieldDef[] {
   return [
     num(`${p}.altitude_m`, `Level ${i + 1} pressure altitude`, 'altitude', 'm'),
     num(`${p}.from_deg`, `Level ${i + 1} wind from (° true)`, 'angle', 'deg'),
-    num(`${p}.speed_m_s`, `Level ${i + 1} wind speed`, 'airspeed', 'm_s'),
+    num(`${p}.speed_m_s`, `Level ${i + 1} wind speed`, 'windSpeed', 'm_s'),
     num(`${p}.isaOffset_K`, `Level ${i + 1} ISA deviation`, 'temperatureDelta', 'K_delta', {
       optional: true,
     }),

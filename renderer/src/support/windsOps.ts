@@ -5,7 +5,7 @@
  */
 import type { Plan, WindLevelData } from '../../../core/plan/schema.ts';
 import { FT } from '../../../core/units.ts';
-import type { UnitSystemId } from '../../../core/units.ts';
+import type { UnitSystem } from '../../../core/units.ts';
 
 export function withWindLevels(plan: Plan, levels: readonly WindLevelData[]): Plan {
   const { windsAloft: _old, ...env } = plan.environment;
@@ -21,7 +21,7 @@ export function withWindLevels(plan: Plan, levels: readonly WindLevelData[]): Pl
  */
 export function addWindLevel(
   levels: readonly WindLevelData[],
-  system: UnitSystemId,
+  system: UnitSystem,
 ): WindLevelData[] {
   const step = system === 'aviation' ? 3000 * FT : 1000;
   const top = levels.reduce<WindLevelData | undefined>(

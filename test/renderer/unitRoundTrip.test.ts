@@ -1,0 +1,89 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { UNITS, UNIT_SYSTEMS, unitsOf, type Quantity, type UnitId } from '../../core/units.ts';
+import { editableText, storedFromText } from '../../renderer/src/support/fieldBinding.ts';
+import { numberStyle, type NumberStyle } from '../../renderer/src/support/numberText.ts';
+import { CHOOSABLE } from '../../renderer/src/support/unitSettings.ts';
+
+/** Every unit a quantity can be shown in: its unit in each preset and every per-quantity choice. */
+function unitsShown(q: Quantity): UnitId[] {
+  const set = new Set<UnitId>(Object.values(UNIT_SYSTEMS).map((s) => s[q]));
+  for (const c of CHOOSABLE) if (c.quantity === q) c.units.forEach((u) => set.add(u));
+  return [...set];
+}
+
+/** The SI unit of a dimension (factor 1, no offset): where the plan stores it. */
+function siUnit(u: UnitId): UnitId {
+  const si = unitsOf(UNITS[u].dimension).find((x) => UNITS[x].factor === 1 && !UNITS[x].offset);
+  if (!si) throw new Error(`no SI unit for ${u}`);
+  return si;
+}
+
+const QUANTITIES = Object.keys(UNIT_SYSTEMS.si) as Quantity[];
+const STYLES: NumberStyle[] = [numberStyle('en-US'), numberStyle('de-DE')];
+
+/**
+ * Typed text as a person writes a number: up to 9 significant digits, at most 6 decimals,
+ * no leading or trailing zeros (the one spelling of its value), optional minus.
+ */
+const typedNumber = fc
+  .tuple(
+    fc.boolean(),
+    fc.integer({ min: 0, max: 999_999 }),
+    fc.integer({ min: 0, max: 6 }),
+    fc.integer({ min: 0, max: 999 }),
+  )
+  .map(([neg, whole, places, frac]) => {
+    const fracText =
+      places === 0 ? '' : String(frac).padStart(3, '0').slice(0, places).replace(/0+$/, '');
+    const body = fracText === '' ? String(whole) : `${whole}.${fracText}`;
+    return body === '0' ? '0' : `${neg ? '-' : ''}${body}`;
+  });
+
+describe('unit round trips: typed → stored (SI) → shown is the typed text', () => {
+  it('for every quantity, every unit it can be shown in, in an English and a German locale', () => {
+    // Exact factors (NIST SP 811 appendix B; 1959 yard and pound; 3rd CGPM g0): a value typed
+    // in any unit converts to SI at full precision and back to the same digits.
+    const cases = QUANTITIES.flatMap((q) => unitsShown(q).map((u) => [q, u] as const));
+    expect(cases.length).toBeGreaterThan(QUANTITIES.length);
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...cases),
+        fc.constantFrom(...STYLES),
+        typedNumber,
+        ([quantity, unit], style, plain) => {
+          const stored = siUnit(unit);
+          // Absolute temperatures below 0 K are refused (core/units.ts), so skip them here.
+          if (
+            UNITS[unit].dimension === 'temperature' &&
+            Number(plain) * UNITS[unit].factor + (UNITS[unit].offset ?? 0) < 0
+          )
+            return true;
+          const typed = style.decimal === '.' ? plain : plain.replace('.', style.decimal);
+          const si = storedFromText(typed, unit, stored, { style });
+          expect(Number.isFinite(si)).toBe(true);
+          expect(editableText(si, stored, unit, quantity, style)).toBe(typed);
+          return true;
+        },
+      ),
+      { seed: 11, numRuns: 3000 },
+    );
+  });
+
+  it('pilot values stay pilot values: 8000 ft, 120 kt, 2400 lb, 40 US gal, 29.92 inHg', () => {
+    // 8000 ft = 2438.4 m; 120 kt = 61.7333… m/s; 2400 lb = 1088.621688 kg; 40 US gal =
+    // 151.41647136 L; 29.92 inHg = 1013.20759 hPa (exact factors, NIST SP 811 appendix B).
+    const cases: [string, UnitId, UnitId, Quantity, number][] = [
+      ['8000', 'ft', 'm', 'altitude', 2438.4],
+      ['120', 'kt', 'm_s', 'airspeed', (120 * 1852) / 3600],
+      ['2400', 'lb', 'kg', 'mass', 1088.621688],
+      ['40', 'usgal', 'L', 'fuelVolume', 151.41647136],
+      ['29.92', 'inHg', 'Pa', 'pressure', 101320.75888],
+    ];
+    for (const [text, unit, stored, q, expected] of cases) {
+      const si = storedFromText(text, unit, stored);
+      expect(Math.abs(si - expected) / expected).toBeLessThan(1e-14);
+      expect(editableText(si, stored, unit, q)).toBe(text);
+    }
+  });
+});
