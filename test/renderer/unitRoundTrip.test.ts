@@ -4,6 +4,10 @@ import { UNITS, UNIT_SYSTEMS, unitsOf, type Quantity, type UnitId } from '../../
 import { editableText, storedFromText } from '../../renderer/src/support/fieldBinding.ts';
 import { numberStyle, type NumberStyle } from '../../renderer/src/support/numberText.ts';
 import { CHOOSABLE } from '../../renderer/src/support/unitSettings.ts';
+import { allFields } from '../../renderer/src/composables/usePlan.ts';
+import type { NumberFieldDef } from '../../renderer/src/support/fieldTypes.ts';
+import { getAtPath } from '../../renderer/src/support/paths.ts';
+import { examplePlan } from './fixtures.ts';
 
 /** Every unit a quantity can be shown in: its unit in each preset and every per-quantity choice. */
 function unitsShown(q: Quantity): UnitId[] {
@@ -84,6 +88,39 @@ describe('unit round trips: typed → stored (SI) → shown is the typed text', 
       const si = storedFromText(text, unit, stored);
       expect(Math.abs(si - expected) / expected).toBeLessThan(1e-14);
       expect(editableText(si, stored, unit, q)).toBe(text);
+    }
+  });
+});
+
+describe('demo plans for pilots hold pilot values', () => {
+  it('light jet and piston tourer: every altitude, speed, wind, mass, distance and fuel volume is a whole number in aviation units', () => {
+    // Written as pilots give them (8000 ft = 2438.4 m, 250 kt, 2800 lb, 130 NM, 66 US gal),
+    // converted with the exact factors (NIST SP 811), so the boxes show them back whole.
+    const pilotQuantities = new Set([
+      'altitude',
+      'airspeed',
+      'windSpeed',
+      'verticalSpeed',
+      'mass',
+      'fuelMass',
+      'fuelVolume',
+      'distance',
+    ]);
+    for (const name of ['light-jet', 'piston-tourer'] as const) {
+      const plan = examplePlan(name);
+      const fields = allFields(plan).filter(
+        (f): f is NumberFieldDef =>
+          f.type === 'number' && f.quantity !== null && pilotQuantities.has(f.quantity ?? ''),
+      );
+      let checked = 0;
+      for (const f of fields) {
+        const v = getAtPath(plan, f.path);
+        if (typeof v !== 'number' || v === 0) continue;
+        const text = editableText(v, f.stored, UNIT_SYSTEMS.aviation[f.quantity!], f.quantity!);
+        expect(text, `${name} ${f.path}`).toMatch(/^\d+$/);
+        checked++;
+      }
+      expect(checked).toBeGreaterThan(15);
     }
   });
 });
