@@ -13,6 +13,7 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import type { Page } from 'playwright-core';
+import { altitudeOfPressureAltitude } from '../../core/levels.ts';
 import { parsePlanText } from '../../core/plan/load.ts';
 import type { Plan } from '../../core/plan/schema.ts';
 import { convert, UNIT_SYSTEMS, type UnitId, type UnitSystemId } from '../../core/units.ts';
@@ -93,7 +94,10 @@ const nearValue = fc.record({
   fromZero: fc.integer({ min: 1, max: 40 }),
 });
 
-function valueText(shown: number, pick: fc.RecordValue<typeof nearValue>): string {
+function valueText(
+  shown: number,
+  pick: { factor: number; digits: number; fromZero: number },
+): string {
   if (shown === 0) return String(pick.fromZero);
   const v = shown * pick.factor;
   const text = Number(v.toPrecision(pick.digits)).toString();
@@ -291,8 +295,11 @@ describe.runIf(haveChromium || !!process.env.CI)('typing key by key (issue 11)',
     await typeKeyByKey(page, id, 'FL250');
     await page.keyboard.press('Tab');
     await expect(page.inputValue(byTestId(id))).resolves.toBe('FL250');
-    // FL250 = 25 000 ft = 7620 m (ft = 0.3048 m exactly, NIST SP 811).
-    expect(getAtPath(await savedPlan(page), 'aircraft.ceiling_m')).toBeCloseTo(7620, 9);
+    // FL250 = 25 000 ft = 7620 m pressure altitude (ft = 0.3048 m exactly, NIST SP 811;
+    // flight levels: ICAO Annex 2), above MSL with the plan's QNH (core/levels.ts).
+    const saved = await savedPlan(page);
+    const expected = altitudeOfPressureAltitude(7620, saved.environment.qnh_Pa);
+    expect(getAtPath(saved, 'aircraft.ceiling_m')).toBeCloseTo(expected, 6);
   });
 
   it('the unit choices are remembered after a reload', async () => {

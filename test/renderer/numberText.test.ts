@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { numberStyle, PLAIN_STYLE, readNumber } from '../../renderer/src/support/numberText.ts';
 import { parseNumberText, storedFromText } from '../../renderer/src/support/fieldBinding.ts';
+import { altitudeOfPressureAltitude, flightLevelOf } from '../../core/levels.ts';
 
 // Decimal marks and thousands separators per locale come from the Unicode CLDR data behind
 // Intl (ECMA-402): en-US "." and ",", de-DE "," and ".", fr-FR "," and a narrow space.
@@ -102,14 +103,25 @@ describe('"1,500" and "1.500" in an English and a German locale', () => {
 
 describe('flight levels in altitude boxes', () => {
   // FL350 = 35 000 ft pressure altitude (ICAO Annex 2 and Doc 8168, common practice);
-  // 35 000 ft = 10 668 m exactly (NIST SP 811: ft = 0.3048 m).
-  const altitude = { style: en, flightLevelsAbove_ft: 18_000 };
+  // 35 000 ft = 10 668 m exactly (NIST SP 811: ft = 0.3048 m). With the standard setting
+  // (1013.25 hPa, ICAO) the altitude above MSL is the pressure altitude itself.
+  const standard = { transitionAltitude_m: 18_000 * 0.3048, qnh_Pa: 101_325 };
+  const altitude = { style: en, flightLevels: standard };
 
-  it('accepts "FL350" above the transition altitude as 35 000 ft', () => {
-    expect(parseNumberText('FL350', altitude)).toEqual({ ok: true, value: 35_000, unit: 'ft' });
-    expect(parseNumberText('fl 350', altitude)).toMatchObject({ ok: true, value: 35_000 });
-    expect(storedFromText('FL350', 'm', 'm', altitude)).toBeCloseTo(10_668, 9);
-    expect(storedFromText('FL350', 'ft', 'm', altitude)).toBeCloseTo(10_668, 9);
+  it('accepts "FL350" above the transition altitude as 35 000 ft pressure altitude', () => {
+    const r = parseNumberText('FL350', altitude);
+    expect(r.ok && r.unit).toBe('m');
+    expect(r.ok && r.value).toBeCloseTo(10_668, 6);
+    expect(parseNumberText('fl 350', altitude).ok).toBe(true);
+    expect(storedFromText('FL350', 'ft', 'm', altitude)).toBeCloseTo(10_668, 6);
+  });
+
+  it('with another QNH the altitude is the one the screen shows as that level (core/levels.ts)', () => {
+    // core/levels.ts is checked against ICAO pressure altitude in test/core/levels.test.ts.
+    const rule = { transitionAltitude_m: 5000 * 0.3048, qnh_Pa: 103_000 };
+    const stored = storedFromText('FL120', 'm', 'm', { style: en, flightLevels: rule });
+    expect(flightLevelOf(stored, rule)).toBe(120);
+    expect(stored).toBeCloseTo(altitudeOfPressureAltitude(12_000 * 0.3048, 103_000), 9);
   });
 
   it('refuses a level at or below the transition altitude, and levels in other boxes', () => {
@@ -117,10 +129,11 @@ describe('flight levels in altitude boxes', () => {
     expect(low.ok).toBe(false);
     if (!low.ok) expect(low.message).toMatch(/transition altitude \(18000 ft\)/);
     // A European transition altitude of 5000 ft (common practice) allows FL60.
-    expect(parseNumberText('FL60', { style: en, flightLevelsAbove_ft: 5000 })).toMatchObject({
-      ok: true,
-      value: 6000,
-    });
+    const europe = {
+      style: en,
+      flightLevels: { ...standard, transitionAltitude_m: 5000 * 0.3048 },
+    };
+    expect(parseNumberText('FL60', europe)).toMatchObject({ ok: true });
     expect(parseNumberText('FL350', { style: en }).ok).toBe(false);
     expect(parseNumberText('FL3500', altitude).ok).toBe(false);
     expect(parseNumberText('FL', altitude).ok).toBe(false);

@@ -59,8 +59,12 @@ describe('unit presets and per-quantity units', () => {
 
   it('only altitude boxes read flight levels, above the set transition altitude', () => {
     const u = createUnits({ preset: 'aviation', locale: 'en-US', transitionAltitude_ft: 6000 });
-    expect(u.reading('altitude').flightLevelsAbove_ft).toBe(6000);
-    expect(u.reading('distance').flightLevelsAbove_ft).toBeUndefined();
+    // 6000 ft = 1828.8 m (ft = 0.3048 m exactly, NIST SP 811).
+    expect(u.reading('altitude', 101_325).flightLevels?.transitionAltitude_m).toBeCloseTo(
+      1828.8,
+      9,
+    );
+    expect(u.reading('distance').flightLevels).toBeUndefined();
     expect(u.numberStyle.value.decimal).toBe('.');
     u.locale.value = 'de-DE';
     expect(u.numberStyle.value.decimal).toBe(',');

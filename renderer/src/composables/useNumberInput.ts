@@ -57,7 +57,9 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
     const q = def().quantity;
     return q ? units.unitLabel(q) : '';
   });
-  const reading = computed(() => units.reading(def().quantity ?? null));
+  const reading = computed(() =>
+    units.reading(def().quantity ?? null, plan.draft.value.environment.qnh_Pa),
+  );
   const textFor = (v: number | undefined) => {
     const d = def();
     if (v === undefined) return '';

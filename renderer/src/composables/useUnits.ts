@@ -6,8 +6,10 @@
  * All number text on screen goes through `format` (core/format.ts).
  */
 import { computed, inject, ref, type ComputedRef, type InjectionKey, type Ref } from 'vue';
+import { STANDARD_SETTING_PA, type FlightLevelRule } from '../../../core/levels.ts';
 import {
   convert,
+  FT,
   UNITS,
   type Quantity,
   type UnitId,
@@ -59,8 +61,10 @@ export interface Units {
   readonly transitionAltitude_ft: Ref<number>;
   unitFor(quantity: Quantity): UnitId;
   unitLabel(quantity: Quantity): string;
-  /** How a box showing `quantity` reads typed text. */
-  reading(quantity: Quantity | null): TextReading;
+  /** How a box showing `quantity` reads typed text (altitudes: flight levels with this QNH). */
+  reading(quantity: Quantity | null, qnh_Pa?: number): TextReading;
+  /** Flight levels above the transition altitude set, with the plan's QNH (core/levels.ts). */
+  flightLevelRule(qnh_Pa: number): FlightLevelRule;
   /** A stored value (in `stored`) as a number in the display unit of `quantity`. */
   toDisplay(value: number, stored: UnitId, quantity: Quantity): number;
   /** A number in the display unit of `quantity` back into `stored`. */
@@ -100,6 +104,10 @@ export function createUnits(initial: UnitSystemId | UnitSettings = 'si'): Units 
     numberStyle(locale.value === 'auto' ? browserLocale() : locale.value),
   );
   const unitFor = (q: Quantity): UnitId => map.value[q];
+  const flightLevelRule = (qnh_Pa: number): FlightLevelRule => ({
+    transitionAltitude_m: transitionAltitude_ft.value * FT,
+    qnh_Pa: Number.isFinite(qnh_Pa) ? qnh_Pa : STANDARD_SETTING_PA,
+  });
   return {
     preset,
     overrides,
@@ -119,10 +127,11 @@ export function createUnits(initial: UnitSystemId | UnitSettings = 'si'): Units 
     transitionAltitude_ft,
     unitFor,
     unitLabel: (q) => UNITS[unitFor(q)].label,
-    reading: (q) =>
+    reading: (q, qnh_Pa = STANDARD_SETTING_PA) =>
       q === 'altitude'
-        ? { style: style.value, flightLevelsAbove_ft: transitionAltitude_ft.value }
+        ? { style: style.value, flightLevels: flightLevelRule(qnh_Pa) }
         : { style: style.value },
+    flightLevelRule,
     toDisplay: (value, stored, q) => convert(value, stored, unitFor(q)),
     fromDisplay: (value, stored, q) => convert(value, unitFor(q), stored),
     format: (v, q, opts) => formatQuantity(v, q, system.value, opts),

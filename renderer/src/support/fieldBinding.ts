@@ -12,29 +12,52 @@ import {
   formatSignificant,
   significantDecimals,
 } from '../../../core/format.ts';
-import { convert, toSI, type Quantity, type UnitId } from '../../../core/units.ts';
-import {
-  localNumber,
-  PLAIN_STYLE,
-  readNumber,
-  type NumberReading,
-  type NumberStyle,
-} from './numberText.ts';
+import { convert, FT, toSI, type Quantity, type UnitId } from '../../../core/units.ts';
+import { altitudeOfPressureAltitude, type FlightLevelRule } from '../../../core/levels.ts';
+import { localNumber, PLAIN_STYLE, readNumber, type NumberStyle } from './numberText.ts';
 
-export type FieldParse = NumberReading;
+export type FieldParse =
+  { ok: true; value: number; note?: string; unit?: 'm' } | { ok: false; message: string };
 
 /** How a box reads text: the locale's marks, and flight levels where the field allows them. */
 export interface TextReading {
   readonly style: NumberStyle;
-  /** Altitude fields accept "FL350" above this transition altitude (feet). */
-  readonly flightLevelsAbove_ft?: number;
+  /** Altitude fields accept "FL350" above the transition altitude of this rule. */
+  readonly flightLevels?: FlightLevelRule;
 }
 
 export const PLAIN_READING: TextReading = { style: PLAIN_STYLE };
 
-/** Reads a typed number by the rule of `reading` (renderer/src/support/numberText.ts). */
+/**
+ * Reads a typed number by the rule of `reading` (renderer/src/support/numberText.ts). A
+ * flight level becomes the altitude above MSL whose pressure altitude it is with the plan's
+ * QNH (core/levels.ts, the rule the screen shows levels by), in metres, and is accepted only
+ * above the transition altitude.
+ */
 export function parseNumberText(text: string, reading: TextReading = PLAIN_READING): FieldParse {
-  return readNumber(text, reading.style, { flightLevelsAbove_ft: reading.flightLevelsAbove_ft });
+  const rule = reading.flightLevels;
+  const r = readNumber(text, reading.style, { flightLevels: rule !== undefined });
+  if (!r.ok) return r;
+  if (r.unit !== 'FL')
+    return r.note === undefined
+      ? { ok: true, value: r.value }
+      : { ok: true, value: r.value, note: r.note };
+  if (!rule) return { ok: false, message: 'flight levels are not used here' };
+  const level = `FL${String(r.value).padStart(3, '0')}`;
+  let altitude_m: number;
+  try {
+    altitude_m = altitudeOfPressureAltitude(r.value * 100 * FT, rule.qnh_Pa);
+  } catch {
+    return { ok: false, message: `${level} needs a valid QNH` };
+  }
+  if (!(altitude_m > rule.transitionAltitude_m)) {
+    const ta = plainNumber(rule.transitionAltitude_m / FT, 6);
+    return {
+      ok: false,
+      message: `${level} is not above the transition altitude (${ta} ft): enter an altitude`,
+    };
+  }
+  return { ok: true, value: altitude_m, unit: 'm' };
 }
 
 /**

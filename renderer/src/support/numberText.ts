@@ -10,9 +10,9 @@
  * silently 1.5 where 1500 was meant, nor the other way round.
  *
  * Flight levels ("FL350" = 35 000 ft pressure altitude, ICAO Annex 2 / Doc 8168; common
- * practice) are accepted where the caller allows them, only above the transition altitude
- * the person set (it varies by country: 18 000 ft in the USA, 3 000–6 000 ft in much of
- * Europe; common practice).
+ * practice) are read where the caller allows them; the caller turns the level into an
+ * altitude with the plan's QNH and accepts it only above the transition altitude
+ * (renderer/src/support/fieldBinding.ts, core/levels.ts).
  *
  * Files and the CLI never come here: they are locale-free JSON numbers.
  */
@@ -56,14 +56,14 @@ export type NumberReading =
       value: number;
       /** How ambiguous text was read, to show beside the field. */
       note?: string;
-      /** Set when the text carried its own unit (a flight level is in feet). */
-      unit?: 'ft';
+      /** Set when the text carried its own unit: a flight level (hundreds of feet of pressure altitude). */
+      unit?: 'FL';
     }
   | { ok: false; message: string };
 
 export interface ReadOptions {
-  /** Accept "FL350" above this transition altitude (feet). */
-  flightLevelsAbove_ft?: number;
+  /** Accept "FL350" (the caller turns the level into an altitude and checks the transition). */
+  flightLevels?: boolean;
 }
 
 const q = (s: string) => `"${s === ' ' ? 'space' : s}"`;
@@ -79,21 +79,15 @@ export function localNumber(text: string, style: NumberStyle): string {
   return style.decimal === '.' ? text : text.replace('.', style.decimal);
 }
 
-function readFlightLevel(t: string, above_ft: number | undefined): NumberReading | null {
+function readFlightLevel(t: string, allowed: boolean): NumberReading | null {
   const m = /^FL(\d*)$/i.exec(t);
   if (!m) return null;
-  if (above_ft === undefined) return { ok: false, message: 'flight levels are not used here' };
+  if (!allowed) return { ok: false, message: 'flight levels are not used here' };
   const digits = m[1] ?? '';
-  if (!/^\d{1,3}$/.test(digits))
+  if (!/^\d{1,3}$/.test(digits)) {
     return { ok: false, message: 'a flight level is FL and up to 3 digits, as FL350' };
-  const ft = Number(digits) * 100;
-  if (!(ft > above_ft)) {
-    return {
-      ok: false,
-      message: `FL${digits} is not above the transition altitude (${above_ft} ft): enter an altitude`,
-    };
   }
-  return { ok: true, value: ft, unit: 'ft' };
+  return { ok: true, value: Number(digits), unit: 'FL' };
 }
 
 /** Whether `intPart` is grouped the way the locale groups (Intl), or in plain threes. */
@@ -118,7 +112,7 @@ export function readNumber(
   const shown = text.trim();
   if (shown === '') return { ok: false, message: 'enter a number' };
   const compact = shown.replace(SPACES, '');
-  const fl = readFlightLevel(compact, options.flightLevelsAbove_ft);
+  const fl = readFlightLevel(compact, options.flightLevels === true);
   if (fl) return fl;
   // Spaces group digits in many locales and are never a decimal mark: they are skipped.
   const group = style.group === ' ' ? '' : style.group;
