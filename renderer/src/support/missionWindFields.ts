@@ -36,7 +36,7 @@ export function missionWindFields(plan: Plan): FieldDef[] {
   if (plan.environment.missionWind?.by !== 'steady') return [pick];
   return [
     pick,
-    num(`${P}.speed_m_s`, 'Mission wind speed', 'airspeed', 'm_s', {
+    num(`${P}.speed_m_s`, 'Mission wind speed', 'windSpeed', 'm_s', {
       hint: 'legs follow unless set to their own',
     }),
     num(`${P}.from_deg`, 'Mission wind from (° true)', 'angle', 'deg'),
