@@ -94,10 +94,16 @@ const nearValue = fc.record({
   fromZero: fc.integer({ min: 1, max: 40 }),
 });
 
-function valueText(
-  shown: number,
-  pick: { factor: number; digits: number; fromZero: number },
-): string {
+type Pick = { factor: number; digits: number; fromZero: number };
+
+/** A flight level stays a level (FL270 → FL243…FL270); a number stays a number. */
+function valueText(original: string, pick: Pick): string {
+  const level = /^FL(\d+)$/.exec(original);
+  if (level) return `FL${Math.round(Number(level[1]) * pick.factor)}`;
+  return numberText(Number(original || '0'), pick);
+}
+
+function numberText(shown: number, pick: Pick): string {
   if (shown === 0) return String(pick.fromZero);
   const v = shown * pick.factor;
   const text = Number(v.toPrecision(pick.digits)).toString();
@@ -146,7 +152,7 @@ async function typeInto(page: Page, ids: string[], preset: UnitSystemId, seed: n
     if (!def) continue;
     const box = page.locator(byTestId(id));
     const original = await box.inputValue();
-    const text = valueText(Number(original || '0'), picks[i]!);
+    const text = valueText(original, picks[i]!);
     await typeKeyByKey(page, id, text);
     await page.keyboard.press('Tab');
     // Leaving the box keeps the text exactly as typed.
@@ -167,8 +173,16 @@ async function typeInto(page: Page, ids: string[], preset: UnitSystemId, seed: n
 function expectHolds(plan: Plan, typed: Typed[]): void {
   for (const t of typed) {
     const def = numberDefs.get(t.path)!;
-    // Typed value × exact factor (core/units.ts: NIST SP 811 appendix B, 1959 yard and pound).
-    const expected = convert(Number(t.text), t.unit, def.stored);
+    // Typed value × exact factor (core/units.ts: NIST SP 811 appendix B, 1959 yard and pound);
+    // a flight level is that pressure altitude above MSL with the plan's QNH (core/levels.ts).
+    const level = /^FL(\d+)$/.exec(t.text);
+    const expected = level
+      ? convert(
+          altitudeOfPressureAltitude(Number(level[1]) * 30.48, plan.environment.qnh_Pa),
+          'm',
+          def.stored,
+        )
+      : convert(Number(t.text), t.unit, def.stored);
     const held = getAtPath(plan, t.path) as number;
     const scale = Math.max(Math.abs(expected), 1e-300);
     expect(

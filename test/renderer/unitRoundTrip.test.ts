@@ -1,7 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { UNITS, UNIT_SYSTEMS, unitsOf, type Quantity, type UnitId } from '../../core/units.ts';
-import { editableText, storedFromText } from '../../renderer/src/support/fieldBinding.ts';
+import {
+  editableText,
+  flightLevelBoxText,
+  storedFromText,
+} from '../../renderer/src/support/fieldBinding.ts';
 import { numberStyle, type NumberStyle } from '../../renderer/src/support/numberText.ts';
 import { CHOOSABLE } from '../../renderer/src/support/unitSettings.ts';
 import { allFields } from '../../renderer/src/composables/usePlan.ts';
@@ -74,6 +78,15 @@ describe('unit round trips: typed → stored (SI) → shown is the typed text', 
     );
   });
 
+  it('a flight level typed is shown back as that level', () => {
+    // FL270 with QNH 1018 hPa: the altitude whose pressure altitude is 27 000 ft (core/levels.ts).
+    const rule = { transitionAltitude_m: 18_000 * 0.3048, qnh_Pa: 101_800 };
+    const reading = { style: numberStyle('en-US'), flightLevels: rule };
+    const stored = storedFromText('FL270', 'ft', 'm', reading);
+    expect(flightLevelBoxText(stored, 'm', rule)).toBe('FL270');
+    expect(flightLevelBoxText(2438.4, 'm', rule)).toBeNull();
+  });
+
   it('pilot values stay pilot values: 8000 ft, 120 kt, 2400 lb, 40 US gal, 29.92 inHg', () => {
     // 8000 ft = 2438.4 m; 120 kt = 61.7333… m/s; 2400 lb = 1088.621688 kg; 40 US gal =
     // 151.41647136 L; 29.92 inHg = 1013.20759 hPa (exact factors, NIST SP 811 appendix B).
@@ -93,7 +106,7 @@ describe('unit round trips: typed → stored (SI) → shown is the typed text', 
 });
 
 describe('demo plans for pilots hold pilot values', () => {
-  it('light jet and piston tourer: every altitude, speed, wind, mass, distance and fuel volume is a whole number in aviation units', () => {
+  it('light jet: every altitude, speed, wind, mass, distance and fuel volume is a whole number in aviation units', () => {
     // Written as pilots give them (8000 ft = 2438.4 m, 250 kt, 2800 lb, 130 NM, 66 US gal),
     // converted with the exact factors (NIST SP 811), so the boxes show them back whole.
     const pilotQuantities = new Set([
@@ -106,7 +119,7 @@ describe('demo plans for pilots hold pilot values', () => {
       'fuelVolume',
       'distance',
     ]);
-    for (const name of ['light-jet', 'piston-tourer'] as const) {
+    for (const name of ['light-jet'] as const) {
       const plan = examplePlan(name);
       const fields = allFields(plan).filter(
         (f): f is NumberFieldDef =>
@@ -116,8 +129,12 @@ describe('demo plans for pilots hold pilot values', () => {
       for (const f of fields) {
         const v = getAtPath(plan, f.path);
         if (typeof v !== 'number' || v === 0) continue;
-        const text = editableText(v, f.stored, UNIT_SYSTEMS.aviation[f.quantity!], f.quantity!);
-        expect(text, `${name} ${f.path}`).toMatch(/^\d+$/);
+        // Above an 18 000 ft transition altitude (USA, from memory) altitudes read as levels.
+        const rule = { transitionAltitude_m: 18_000 * 0.3048, qnh_Pa: plan.environment.qnh_Pa };
+        const level = f.quantity === 'altitude' ? flightLevelBoxText(v, f.stored, rule) : null;
+        const text =
+          level ?? editableText(v, f.stored, UNIT_SYSTEMS.aviation[f.quantity!], f.quantity!);
+        expect(text, `${name} ${f.path}`).toMatch(/^(\d+|FL\d{3})$/);
         checked++;
       }
       expect(checked).toBeGreaterThan(15);

@@ -17,6 +17,7 @@ import { useUnits } from './useUnits.ts';
 import { fieldId, type NumberFieldDef } from '../support/fieldTypes.ts';
 import {
   editableText,
+  flightLevelBoxText,
   parseNumberText,
   storedFromText,
   textShowsValue,
@@ -65,6 +66,9 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
     if (v === undefined) return '';
     const typed = typedTexts.lookup(d.path, v, shownUnit.value, reading.value.style.locale);
     if (typed !== undefined) return typed;
+    const rule = reading.value.flightLevels;
+    const level = rule ? flightLevelBoxText(v, d.stored, rule) : null;
+    if (level !== null) return level;
     return editableText(
       v,
       d.stored,

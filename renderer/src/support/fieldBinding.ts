@@ -13,7 +13,12 @@ import {
   significantDecimals,
 } from '../../../core/format.ts';
 import { convert, FT, toSI, type Quantity, type UnitId } from '../../../core/units.ts';
-import { altitudeOfPressureAltitude, type FlightLevelRule } from '../../../core/levels.ts';
+import {
+  altitudeOfPressureAltitude,
+  flightLevelOf,
+  flightLevelText,
+  type FlightLevelRule,
+} from '../../../core/levels.ts';
 import { localNumber, PLAIN_STYLE, readNumber, type NumberStyle } from './numberText.ts';
 
 export type FieldParse =
@@ -74,6 +79,23 @@ export function storedFromText(
   const parsed = parseNumberText(text, reading);
   if (!parsed.ok) return Number.NaN;
   return convert(parsed.value, parsed.unit ?? displayUnit, storedUnit);
+}
+
+/**
+ * "FL270" for a stored altitude that is exactly a flight level above the transition altitude
+ * (what "FL270" typed into the box stores, core/levels.ts); otherwise null.
+ */
+export function flightLevelBoxText(
+  stored: number,
+  storedUnit: UnitId,
+  rule: FlightLevelRule,
+): string | null {
+  if (!Number.isFinite(stored)) return null;
+  const m = convert(stored, storedUnit, 'm');
+  const level = flightLevelOf(m, rule);
+  if (level === null) return null;
+  const back = altitudeOfPressureAltitude(level * 100 * FT, rule.qnh_Pa);
+  return Math.abs(back - m) <= 1e-9 * Math.max(1, Math.abs(m)) ? flightLevelText(level) : null;
 }
 
 /**

@@ -116,7 +116,7 @@ describe('bad plan files are refused with path-named messages', () => {
   });
 
   it('numbers too large for a double (JSON.parse makes them Infinity)', () => {
-    const text = demoText('piston-tourer.json').replace(/"empty_kg": [0-9.]+/, '"empty_kg": 1e400');
+    const text = demoText('piston-tourer.json').replace('"empty_kg": 780', '"empty_kg": 1e400');
     expect(issuesOf(parsePlanText(text))[0]?.message).toBe(
       'aircraft.mass.empty_kg: Infinity — must be a finite number kg',
     );
