@@ -9,7 +9,8 @@
  * (slope.ts; Anderson, Aircraft Performance and Design, ch. 5): climb at a throttle τ,
  * ROC = (τ·P_avail − D·V)/(W·k_a); descent at a given rate, thrust power D·V − W·RoD·k_a
  * (idle consumption below idle; below zero the descent is steeper than an idle glide and
- * needs drag devices); glide at idle, sink = D·V/(W·k_a) = V/((L/D)·k_a). Paths steeper than
+ * needs drag devices); glide at idle with the thrust the idle fuel flow implies (idleThrust.ts),
+ * sink = (D·V − P_idle)/(W·k_a), = V/((L/D)·k_a) with no idle thrust. Paths steeper than
  * 30° (sin γ = MAX_SIN_GAMMA) are outside the small-angle model and stop the leg.
  * An orbit over a point (loiter) covers no ground; it can hold station while its horizontal
  * airspeed exceeds the wind speed (a circle flown in a steady wind drifts with the air mass,
@@ -22,6 +23,7 @@
  */
 import { G0 } from '../units.ts';
 import { altitudeForDensity, ambientAt, type Ambient, type FlightModel } from './model.ts';
+import { idleThrustPower_W } from './idleThrust.ts';
 import { availablePower_W, consumption, idleExcess } from './power.ts';
 import { scheduleTas, type ScheduleMemo, type SpeedSchedule } from './schedule.ts';
 import { scheduleSlope } from './slope.ts';
@@ -222,9 +224,16 @@ export function evaluatePoint(
     climb = -v.rate_m_s;
     required = D * V - W * v.rate_m_s * accel;
     thrust = required;
-    out.idleSink_m_s = (D * V) / (W * accel);
+    out.idleSink_m_s = (D * V - idleThrustPower_W(model.power, amb, V, rho)) / (W * accel);
   } else if (v.kind === 'glide') {
-    const sink = (D * V) / (W * accel);
+    // At idle the engine gives the thrust its idle fuel flow implies (idleThrust.ts).
+    const idle = idleThrustPower_W(model.power, amb, V, rho);
+    const sink = (D * V - idle) / (W * accel);
+    if (!(sink > 0)) {
+      throw new FlightLimit(
+        `at idle the engine's thrust power (${fmt(idle)} W) at ${fmt(V)} m/s at least balances the drag (${fmt(D * V)} W): the aircraft cannot glide down at idle (lower the idle fraction or descend at a rate)`,
+      );
+    }
     if (sink >= MAX_SIN_GAMMA * V) {
       throw new FlightLimit(
         `a glide at ${fmt(V)} m/s would be steeper than 30° (L/D ${fmt(CL / CD)} there, (L/D)max ${fmt(maxLiftToDragOf(model))}; a glide needs an L/D above about ${fmt(1 / MAX_SIN_GAMMA)})`,

@@ -149,7 +149,7 @@ export function jetThrustMax_N(c: PowerConstants, air: EngineAir, V_m_s: number)
 }
 
 /** Jet thrust the idle fraction applies to (core/propulsion/jet.ts): T_max, or T_SL·δ. */
-function jetIdleReference_N(c: PowerConstants, air: EngineAir): number {
+export function jetIdleReference_N(c: PowerConstants, air: EngineAir): number {
   return c.lapse === null ? air.engineMax : c.thrustSL_N * air.atm.delta;
 }
 
