@@ -8,9 +8,9 @@
  * powerplant (an idle descent, as jets plan it); it burns idle fuel only.
  *
  * The cruise covers the alternate distance left after the climb and the glide; the glide's
- * ground distance is measured from the top of climb (a glide at the (L/D)max lift coefficient
- * covers nearly the same ground at any mass), so the profile's ground distance matches the
- * policy's to that small effect. When the alternate is too short for the climb and the glide,
+ * ground distance is first measured from the top of climb, then the cruise is shortened by
+ * what the lighter glide after it reaches farther (idle thrust makes a glide's length depend
+ * on the mass), so the profile's ground distance matches the policy's. When the alternate is too short for the climb and the glide,
  * the top is lowered in proportion, h_top = h0 + (h_top − h0)·D/(d_climb + d_glide), and tried
  * again (at most MAX_TOP_TRIALS times; climb and glide distance grow at least in proportion to
  * the height, so one try normally fits); whatever distance is left is cruised at that top. An
@@ -29,6 +29,8 @@ import type { ReserveProblem } from './types.ts';
 
 /** Tries of the proportional rule for an alternate too short to reach its altitude. */
 const MAX_TOP_TRIALS = 4;
+/** Passes that shorten the cruise for the lighter glide after it (each cuts the mismatch about a thousandfold). */
+const GLIDE_REFINE_PASSES = 3;
 /** A top less than this above the landing altitude is flown level. */
 const MIN_CLIMB_M = 1;
 
@@ -157,14 +159,25 @@ export function alternateReserve(
   if (climb === null || glide === null) return out;
   out.top_m = top;
   out.climb = used(start, climb.end);
-  const left = D - glide.end.x_m;
+  let left = D - glide.end.x_m;
   if (left > 0) {
-    const cruise = cruiseAt(top, climb.end, left);
-    if (cruise === null) return out;
-    out.cruise = used(climb.end, cruise.end);
-    glide = glideFrom(cruise.end);
-    if (glide === null) return out;
-    out.descent = used(cruise.end, glide.end);
+    // The glide after the cruise starts lighter and (with idle thrust) reaches a little
+    // farther than the one measured from the top of climb: shorten the cruise by the
+    // difference and fly it again, so the profile's ground distance matches the policy's.
+    for (let pass = 0; ; pass++) {
+      const cruise = cruiseAt(top, climb.end, left);
+      if (cruise === null) return out;
+      const after = glideFrom(cruise.end);
+      if (after === null) return out;
+      const over = after.end.x_m - D;
+      if (pass < GLIDE_REFINE_PASSES && Math.abs(over) > 1e-10 * D && left - over > 0) {
+        left -= over;
+        continue;
+      }
+      out.cruise = used(climb.end, cruise.end);
+      out.descent = used(cruise.end, after.end);
+      break;
+    }
   } else out.descent = used(climb.end, glide.end);
   out.amount = out.climb + out.cruise + out.descent;
   return out;
