@@ -52,9 +52,16 @@ export function readPlan(path: string, io: CliIo): ReadOutcome {
 }
 
 /**
- * The plan files named on the command line: a folder stands for its `.json` files (not its
- * subfolders), sorted by name; null and a message when a folder cannot be listed.
+ * The plan files named on the command line: a folder stands for its plan files — names
+ * ending in `.legwise` (the desktop app's extension) or `.json` — not its subfolders, sorted
+ * by name; null and a message when a folder cannot be listed.
  */
+/** Names a folder's plan files carry: the desktop app's `.legwise` and plain `.json`. */
+export function isPlanFileName(name: string): boolean {
+  const lower = name.toLowerCase();
+  return lower.endsWith('.legwise') || lower.endsWith('.json');
+}
+
 export function expandInputs(
   inputs: readonly string[],
   io: CliIo,
@@ -82,7 +89,7 @@ export function expandInputs(
       return { error: `cannot list ${input}: ${errorCode(err)}` };
     }
     const sep = input.endsWith('/') ? '' : '/';
-    const plans = names.filter((n) => n.toLowerCase().endsWith('.json')).sort();
+    const plans = names.filter(isPlanFileName).sort();
     for (const n of plans) {
       const full = `${input}${sep}${n}`;
       try {

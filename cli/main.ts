@@ -35,7 +35,7 @@ export const USAGE = `Usage: legwise <command> <plan.json> [options]
 Commands
   solve <plan.json>   fly the plan: per-leg table, totals, checks and verdict
   solve <plan.json|folder>...
-                      several plans (or every .json file in a folder): one summary row
+                      several plans (or every .legwise and .json file in a folder): one summary row
                       per plan — table, --csv, or one JSON object per line with --json
   tune <plan.json>    best cruise altitude, best speed per cruise/loiter leg,
                       maximum payload and reserve sensitivity

@@ -14,7 +14,7 @@ const SHOTS = new URL('../../artifacts/screenshots/', import.meta.url);
 const byTestId = (id: string) => `[data-testid="${id}"]`;
 
 /** Unit presets offered by the switch (radio inputs `unit-<id>`). */
-const PRESETS = ['si', 'aviation'] as const;
+const PRESETS = ['si', 'aviation', 'uav'] as const;
 const SCREENS = [
   { width: 1366, height: 768 },
   { width: 1920, height: 1080 },

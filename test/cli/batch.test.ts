@@ -47,6 +47,21 @@ function solvedFile(path: string) {
 }
 
 describe('legwise solve FOLDER / FILE... (batch)', () => {
+  it('a folder also stands for its .legwise plans (the desktop app saves them so)', () => {
+    const own = mkdtempSync(join(tmpdir(), 'legwise-ext-'));
+    try {
+      copyFileSync(examplePath('light-jet.json'), join(own, 'saved.legwise'));
+      copyFileSync(examplePath('piston-tourer.json'), join(own, 'plain.json'));
+      const { code, out } = legwise(['solve', own]);
+      expect(code).toBe(0);
+      expect(out).toMatch(/plain\.json\s/);
+      expect(out).toMatch(/saved\.legwise\s/);
+      expect(out).toContain('2 plans: 2 OK');
+    } finally {
+      rmSync(own, { recursive: true, force: true });
+    }
+  });
+
   it('a folder: one table row per .json plan, the summary, the caution; exit = worst (1)', () => {
     const { code, out, err } = legwise(['solve', dir]);
     expect(err).toBe('');
