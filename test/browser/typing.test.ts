@@ -328,4 +328,36 @@ describe.runIf(haveChromium || !!process.env.CI)('typing key by key (issue 11)',
     await expect(page.inputValue(byTestId('unit-choice-windSpeed'))).resolves.toBe('kt');
     expect(pageErrors).toEqual([]);
   });
+  it('a climb typed as a height above the departure field is saved as the altitude MSL', async () => {
+    await page.selectOption(byTestId('demo-picker'), 'twelve-legs');
+    await page.click(`label:has(${byTestId('unit-aviation')})`);
+    await page.click(`${byTestId('unit-settings')} > summary`);
+    await page.selectOption(byTestId('altitude-reference'), 'agl');
+    await page.click(`${byTestId('unit-settings')} > summary`);
+    const climb = demo.legs.findIndex((l) => l.kind === 'climb');
+    await page.locator(byTestId('leg-row')).nth(climb).click();
+    const id = `field-legs.${climb}.toAltitude_m`;
+    await expect(page.locator(byTestId(`${id}-unit`)).innerText()).resolves.toBe('ft AGL');
+    await typeKeyByKey(page, id, '3900');
+    await page.keyboard.press('Tab');
+    await expect(page.inputValue(byTestId(id))).resolves.toBe('3900');
+    // Height AGL = altitude MSL − field elevation (definition); ft = 0.3048 m exactly (NIST
+    // SP 811), so the plan holds 3900 × 0.3048 m + the departure elevation.
+    const saved = await savedPlan(page);
+    const expected = 3900 * 0.3048 + saved.environment.departureElevation_m;
+    const stored = getAtPath(saved, `legs.${climb}.toAltitude_m`) as number;
+    expect(Math.abs(stored - expected) / expected).toBeLessThan(1e-12);
+    // The leg list names the reference; field elevations stay MSL.
+    const summary = await page.locator(byTestId('leg-row')).nth(climb).innerText();
+    expect(summary).toContain('to 3900 ft AGL');
+    await openSections(page);
+    await expect(
+      page.locator(byTestId('field-environment.departureElevation_m-unit')).innerText(),
+    ).resolves.toBe('ft MSL');
+    await page.click(`${byTestId('unit-settings')} > summary`);
+    await page.selectOption(byTestId('altitude-reference'), 'msl');
+    await page.click(`${byTestId('unit-settings')} > summary`);
+    await expect(page.locator(byTestId(`${id}-unit`)).innerText()).resolves.toBe('ft MSL');
+    expect(pageErrors).toEqual([]);
+  });
 });

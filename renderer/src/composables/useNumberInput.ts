@@ -22,6 +22,12 @@ import {
   storedFromText,
   textShowsValue,
 } from '../support/fieldBinding.ts';
+import {
+  referencedLabel,
+  referenceOf,
+  referenceOffset_m,
+  shownHeight_m,
+} from '../support/heightReference.ts';
 import { limitInUnit } from '../support/issues.ts';
 import { getAtPath, splitPath } from '../support/paths.ts';
 import { typedTexts } from '../support/typedText.ts';
@@ -54,9 +60,21 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
     const d = def();
     return d.quantity ? units.unitFor(d.quantity) : d.stored;
   });
+  // Route and leg altitudes may be shown above the departure field (heightReference.ts).
+  const reference = computed(() => {
+    const d = def();
+    return d.datum ? referenceOf(d.datum, units.altitudeReference.value) : null;
+  });
+  const offset_m = computed(() =>
+    reference.value && def().stored === 'm'
+      ? referenceOffset_m(reference.value, plan.draft.value.environment.departureElevation_m)
+      : 0,
+  );
   const unitLabel = computed(() => {
     const q = def().quantity;
-    return q ? units.unitLabel(q) : '';
+    if (!q) return '';
+    const label = units.unitLabel(q);
+    return reference.value ? referencedLabel(label, reference.value) : label;
   });
   const reading = computed(() =>
     units.reading(def().quantity ?? null, plan.draft.value.environment.qnh_Pa),
@@ -64,13 +82,16 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
   const textFor = (v: number | undefined) => {
     const d = def();
     if (v === undefined) return '';
-    const typed = typedTexts.lookup(d.path, v, shownUnit.value, reading.value.style.locale);
+    // Typed texts are remembered by the value shown (above the reference), so a text typed
+    // as a height comes back only while the same height is shown.
+    const shown = shownHeight_m(v, offset_m.value);
+    const typed = typedTexts.lookup(d.path, shown, shownUnit.value, reading.value.style.locale);
     if (typed !== undefined) return typed;
     const rule = reading.value.flightLevels;
     const level = rule ? flightLevelBoxText(v, d.stored, rule) : null;
     if (level !== null) return level;
     return editableText(
-      v,
+      shown,
       d.stored,
       shownUnit.value,
       d.quantity ?? d.digits ?? null,
@@ -81,12 +102,21 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
 
   // Refresh the box only when the plan changed underneath it (undo, unit or locale switch, a
   // suggestion applied), never while it still stands for the value — the person's own text stays.
-  watch([stored, shownUnit, reading], () => {
+  watch([stored, shownUnit, reading, offset_m], () => {
     const v = stored.value;
+    // While the departure elevation is being typed (not yet a number) the box waits.
+    if (!Number.isFinite(offset_m.value)) return;
     const same =
       v === undefined
         ? text.value.trim() === ''
-        : textShowsValue(text.value, v, def().stored, shownUnit.value, reading.value);
+        : textShowsValue(
+            text.value,
+            v,
+            def().stored,
+            shownUnit.value,
+            reading.value,
+            offset_m.value,
+          );
     if (!same) text.value = textFor(v);
   });
 
@@ -112,13 +142,13 @@ export function useNumberInput(def: () => NumberFieldDef): NumberInput {
     const value =
       d.optional && text.value.trim() === ''
         ? undefined
-        : storedFromText(text.value, shownUnit.value, d.stored, reading.value);
+        : storedFromText(text.value, shownUnit.value, d.stored, reading.value, offset_m.value);
     // Remembered when the box is left (the finished text, not every prefix on the way).
     pending =
       value === undefined
         ? null
         : {
-            stored: value,
+            stored: shownHeight_m(value, offset_m.value),
             unit: shownUnit.value,
             locale: reading.value.style.locale,
             text: text.value,

@@ -25,6 +25,7 @@ import {
 } from '../../../core/format.ts';
 import { numberStyle, type NumberStyle } from '../support/numberText.ts';
 import type { TextReading } from '../support/fieldBinding.ts';
+import { isAltitudeReference, type AltitudeReference } from '../support/heightReference.ts';
 import {
   CHOOSABLE,
   cleanLocale,
@@ -43,6 +44,8 @@ export interface UnitSettings {
   /** "auto" (the browser's language) or a BCP 47 tag. */
   locale?: string;
   transitionAltitude_ft?: number;
+  /** Route and leg altitudes shown above MSL or above the departure field. */
+  altitudeReference?: AltitudeReference;
 }
 
 export interface Units {
@@ -59,6 +62,8 @@ export interface Units {
   readonly locale: Ref<string>;
   readonly numberStyle: ComputedRef<NumberStyle>;
   readonly transitionAltitude_ft: Ref<number>;
+  /** 'agl': route and leg altitude boxes show heights above the departure field. */
+  readonly altitudeReference: Ref<AltitudeReference>;
   unitFor(quantity: Quantity): UnitId;
   unitLabel(quantity: Quantity): string;
   /** How a box showing `quantity` reads typed text (altitudes: flight levels with this QNH). */
@@ -96,6 +101,9 @@ export function createUnits(initial: UnitSystemId | UnitSettings = 'si'): Units 
   const transitionAltitude_ft = ref(
     settings.transitionAltitude_ft ?? DEFAULT_TRANSITION_ALTITUDE_FT,
   );
+  const altitudeReference = ref<AltitudeReference>(
+    isAltitudeReference(settings.altitudeReference) ? settings.altitudeReference : 'msl',
+  );
   const map = computed<UnitMap>(() => effectiveUnits(preset.value, overrides.value));
   const system = computed<UnitSystem>(() =>
     Object.keys(overrides.value).length === 0 ? preset.value : map.value,
@@ -125,6 +133,7 @@ export function createUnits(initial: UnitSystemId | UnitSettings = 'si'): Units 
     locale,
     numberStyle: style,
     transitionAltitude_ft,
+    altitudeReference,
     unitFor,
     unitLabel: (q) => UNITS[unitFor(q)].label,
     reading: (q, qnh_Pa = STANDARD_SETTING_PA) =>

@@ -290,8 +290,12 @@ export function missionSections(plan: Plan): FieldSection[] {
       fields: [
         num('environment.isaOffset_K', 'ISA deviation', 'temperatureDelta', 'K_delta'),
         num('environment.qnh_Pa', 'QNH', 'pressure', 'Pa'),
-        num('environment.departureElevation_m', 'Departure elevation', 'altitude', 'm'),
-        num('environment.arrivalElevation_m', 'Arrival elevation', 'altitude', 'm'),
+        num('environment.departureElevation_m', 'Departure elevation', 'altitude', 'm', {
+          datum: 'msl',
+        }),
+        num('environment.arrivalElevation_m', 'Arrival elevation', 'altitude', 'm', {
+          datum: 'msl',
+        }),
       ],
     },
     { id: 'missionWind', title: 'Mission wind', fields: missionWindFields(plan) },

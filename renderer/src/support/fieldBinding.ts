@@ -68,17 +68,23 @@ export function parseNumberText(text: string, reading: TextReading = PLAIN_READI
 /**
  * Typed text in `displayUnit` → value in `storedUnit` at full precision (exact factors,
  * core/units.ts); NaN when the text is not a number. A flight level is feet, whatever the
- * box shows.
+ * box shows. A box showing heights above a reference (the departure field,
+ * heightReference.ts) adds `offset_m` to what is typed; a flight level is never shifted.
  */
 export function storedFromText(
   text: string,
   displayUnit: UnitId,
   storedUnit: UnitId,
   reading: TextReading = PLAIN_READING,
+  offset_m = 0,
 ): number {
   const parsed = parseNumberText(text, reading);
   if (!parsed.ok) return Number.NaN;
-  return convert(parsed.value, parsed.unit ?? displayUnit, storedUnit);
+  if (offset_m === 0 || parsed.unit !== undefined) {
+    return convert(parsed.value, parsed.unit ?? displayUnit, storedUnit);
+  }
+  const shown_m = convert(parsed.value, displayUnit, 'm');
+  return convert(shown_m + offset_m, 'm', storedUnit);
 }
 
 /**
@@ -206,8 +212,9 @@ export function textShowsValue(
   storedUnit: UnitId,
   displayUnit: UnitId,
   reading: TextReading = PLAIN_READING,
+  offset_m = 0,
 ): boolean {
-  const fromText = storedFromText(text, displayUnit, storedUnit, reading);
+  const fromText = storedFromText(text, displayUnit, storedUnit, reading, offset_m);
   if (Number.isNaN(fromText) || Number.isNaN(stored))
     return Number.isNaN(fromText) && Number.isNaN(stored);
   const scale = Math.max(Math.abs(stored), Math.abs(fromText), Number.MIN_VALUE);

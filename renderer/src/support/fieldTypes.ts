@@ -4,6 +4,7 @@
  */
 import type { Plan } from '../../../core/plan/schema.ts';
 import type { Quantity, UnitId } from '../../../core/units.ts';
+import type { AltitudeDatum } from './heightReference.ts';
 
 /**
  * An optional block of the plan (`aircraft.field`, `uncertainty` …) that a field lives in.
@@ -29,6 +30,11 @@ export interface NumberFieldDef {
   block?: OptionalBlock;
   /** Significant digits shown for a plain number that is not exact in 6 (coordinates). */
   digits?: number;
+  /**
+   * An altitude above MSL named with its reference: 'launch' boxes follow the height
+   * reference setting (MSL or above the departure field), 'msl' boxes are always MSL.
+   */
+  datum?: AltitudeDatum;
 }
 
 export interface ChoiceOption {
@@ -72,7 +78,7 @@ export function num(
   label: string,
   quantity: Quantity | null,
   stored: UnitId,
-  extra: Partial<Pick<NumberFieldDef, 'optional' | 'hint' | 'block' | 'digits'>> = {},
+  extra: Partial<Pick<NumberFieldDef, 'optional' | 'hint' | 'block' | 'digits' | 'datum'>> = {},
 ): NumberFieldDef {
   return { type: 'number', path, label, quantity, stored, ...extra };
 }

@@ -166,7 +166,7 @@ export function legFields(
     case 'climb':
       return [
         label,
-        num(`${p}.toAltitude_m`, 'Climb to altitude', 'altitude', 'm'),
+        num(`${p}.toAltitude_m`, 'Climb to altitude', 'altitude', 'm', { datum: 'launch' }),
         ...speedFields(`${p}.speed`, { value: 'bestRate', label: 'Best rate of climb' }, leg.speed),
         num(`${p}.throttle`, 'Throttle (of max)', 'ratio', 'fraction'),
         ...trackFields(p, leg, waypoints, missionWind),
@@ -232,7 +232,7 @@ export function legFields(
     case 'descent':
       return [
         label,
-        num(`${p}.toAltitude_m`, 'Descend to altitude', 'altitude', 'm'),
+        num(`${p}.toAltitude_m`, 'Descend to altitude', 'altitude', 'm', { datum: 'launch' }),
         choice(
           `${p}.mode.by`,
           'Descent',

@@ -16,10 +16,17 @@ type Fmt = (
 ) => string;
 
 /**
- * One line on what the leg does, e.g. "to 1500 m, best rate" or "120.0 km at best range";
+ * One line on what the leg does, e.g. "to 1500 m MSL, best rate" or "120.0 km at best range";
  * a cruise whose distance the route sets says where it goes instead ("to Lake at best range").
+ * `height` names a climb's or descent's target with its reference (heightReference.ts);
+ * without it the altitude is formatted as is.
  */
-export function legSummary(leg: Leg, fmt: Fmt, routeTo?: string): string {
+export function legSummary(
+  leg: Leg,
+  fmt: Fmt,
+  routeTo?: string,
+  height: (altitude_m: number) => string = (a) => fmt(a, 'altitude'),
+): string {
   switch (leg.kind) {
     case 'takeoff':
     case 'landing': {
@@ -33,7 +40,7 @@ export function legSummary(leg: Leg, fmt: Fmt, routeTo?: string): string {
       return `allowance ${formatNumber(a.fraction * 100, 1)} % of mass`;
     }
     case 'climb':
-      return `to ${fmt(leg.toAltitude_m, 'altitude')}, ${speedText(leg.speed, fmt)}`;
+      return `to ${height(leg.toAltitude_m)}, ${speedText(leg.speed, fmt)}`;
     case 'cruise': {
       const end =
         leg.end.by === 'distance'
@@ -48,7 +55,7 @@ export function legSummary(leg: Leg, fmt: Fmt, routeTo?: string): string {
     case 'loiter':
       return `${leg.end.by === 'time' ? fmt(leg.end.time_s, 'time') : 'until reserve'} at ${speedText(leg.speed, fmt)}`;
     case 'descent':
-      return `to ${fmt(leg.toAltitude_m, 'altitude')}, ${leg.mode.by === 'glide' ? 'glide' : speedText(leg.mode.speed, fmt)}`;
+      return `to ${height(leg.toAltitude_m)}, ${leg.mode.by === 'glide' ? 'glide' : speedText(leg.mode.speed, fmt)}`;
   }
 }
 

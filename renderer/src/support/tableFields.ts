@@ -10,7 +10,10 @@ export function waypointFields(i: number): FieldDef[] {
     text(`${p}.name`, `Waypoint ${i + 1} name`),
     num(`${p}.lat_deg`, `Waypoint ${i + 1} latitude (° north)`, null, 'deg', { digits: 9 }),
     num(`${p}.lon_deg`, `Waypoint ${i + 1} longitude (° east)`, null, 'deg', { digits: 9 }),
-    num(`${p}.altitude_m`, `Waypoint ${i + 1} altitude`, 'altitude', 'm', { optional: true }),
+    num(`${p}.altitude_m`, `Waypoint ${i + 1} altitude`, 'altitude', 'm', {
+      optional: true,
+      datum: 'launch',
+    }),
   ];
 }
 

@@ -1,5 +1,5 @@
 /**
- * Unit preset, per-quantity units, number locale and transition altitude, kept between
+ * Unit preset, per-quantity units, number locale, transition altitude and height reference, kept between
  * sessions in the renderer's settings store (localStorage; renderer/src/support/settingsStore.ts).
  */
 import { watch } from 'vue';
@@ -11,6 +11,7 @@ import {
   cleanTransitionAltitude,
   isUnitSystemId,
 } from './unitSettings.ts';
+import { isAltitudeReference } from './heightReference.ts';
 
 function parseJson(text: string | null): unknown {
   if (text === null) return null;
@@ -29,6 +30,8 @@ export function readUnitSettings(): UnitSettings {
     overrides: cleanOverrides(preset, parseJson(readSetting('unitChoices'))),
     locale: cleanLocale(readSetting('numberLocale')),
   };
+  const reference = readSetting('altitudeReference');
+  if (isAltitudeReference(reference)) settings.altitudeReference = reference;
   const ta = cleanTransitionAltitude(readSetting('transitionAltitude_ft'));
   return ta === null ? settings : { ...settings, transitionAltitude_ft: ta };
 }
@@ -40,5 +43,6 @@ export function rememberUnitSettings(units: Units): void {
     writeSetting('unitChoices', Object.keys(o).length === 0 ? null : JSON.stringify(o)),
   );
   watch(units.locale, (l) => writeSetting('numberLocale', l === 'auto' ? null : l));
+  watch(units.altitudeReference, (r) => writeSetting('altitudeReference', r === 'msl' ? null : r));
   watch(units.transitionAltitude_ft, (t) => writeSetting('transitionAltitude_ft', String(t)));
 }
