@@ -60,6 +60,14 @@ async function savedPlan(page: Page): Promise<Plan> {
   return loaded.plan;
 }
 
+/** Opens or closes the Units… panel by a click on its heading, whatever state it is in. */
+async function showUnitSettings(page: Page, open: boolean): Promise<void> {
+  const panel = page.locator(byTestId('unit-settings'));
+  if ((await panel.evaluate((e) => (e as HTMLDetailsElement).open)) !== open) {
+    await panel.locator('> summary').click();
+  }
+}
+
 /** Opens every closed field section the way a person does: a click on its heading. */
 async function openSections(page: Page): Promise<void> {
   const closed = page.locator('details.sheet-section:not([open]) > summary');
@@ -331,9 +339,9 @@ describe.runIf(haveChromium || !!process.env.CI)('typing key by key (issue 11)',
   it('a climb typed as a height above the departure field is saved as the altitude MSL', async () => {
     await page.selectOption(byTestId('demo-picker'), 'twelve-legs');
     await page.click(`label:has(${byTestId('unit-aviation')})`);
-    await page.click(`${byTestId('unit-settings')} > summary`);
+    await showUnitSettings(page, true);
     await page.selectOption(byTestId('altitude-reference'), 'agl');
-    await page.click(`${byTestId('unit-settings')} > summary`);
+    await showUnitSettings(page, false);
     const climb = demo.legs.findIndex((l) => l.kind === 'climb');
     await page.locator(byTestId('leg-row')).nth(climb).click();
     const id = `field-legs.${climb}.toAltitude_m`;
@@ -354,9 +362,9 @@ describe.runIf(haveChromium || !!process.env.CI)('typing key by key (issue 11)',
     await expect(
       page.locator(byTestId('field-environment.departureElevation_m-unit')).innerText(),
     ).resolves.toBe('ft MSL');
-    await page.click(`${byTestId('unit-settings')} > summary`);
+    await showUnitSettings(page, true);
     await page.selectOption(byTestId('altitude-reference'), 'msl');
-    await page.click(`${byTestId('unit-settings')} > summary`);
+    await showUnitSettings(page, false);
     await expect(page.locator(byTestId(`${id}-unit`)).innerText()).resolves.toBe('ft MSL');
     expect(pageErrors).toEqual([]);
   });
