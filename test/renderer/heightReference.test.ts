@@ -12,6 +12,7 @@ import {
   shownHeight_m,
   storedAltitude_m,
 } from '../../renderer/src/support/heightReference.ts';
+import { createUnits } from '../../renderer/src/composables/useUnits.ts';
 import { PLAIN_STYLE } from '../../renderer/src/support/numberText.ts';
 
 // The international foot is exactly 0.3048 m (NIST SP 811, B.9).
@@ -60,5 +61,12 @@ describe('heights above the departure field (AGL)', () => {
       offset,
     );
     expect(stored).toBe(altitudeOfPressureAltitude(27_000 * FT_M, 101_325));
+  });
+
+  it('the report header names the reference of the altitudes', () => {
+    const agl = createUnits({ preset: 'aviation', altitudeReference: 'agl' });
+    expect(agl.unitsInWords.value).toContain('route and leg altitudes AGL');
+    agl.altitudeReference.value = 'msl';
+    expect(agl.unitsInWords.value).toMatch(/; altitudes MSL$/);
   });
 });

@@ -125,10 +125,14 @@ export function createUnits(initial: UnitSystemId | UnitSettings = 'si'): Units 
         ? UNIT_PRESET_NAMES[preset.value]
         : `${UNIT_PRESET_NAMES[preset.value]}, own choices`,
     ),
-    unitsInWords: computed(() =>
-      CHOOSABLE.map((c) => `${c.label.toLowerCase()} ${UNITS[map.value[c.quantity]].label}`).join(
-        ', ',
-      ),
+    unitsInWords: computed(
+      () =>
+        CHOOSABLE.map((c) => `${c.label.toLowerCase()} ${UNITS[map.value[c.quantity]].label}`).join(
+          ', ',
+        ) +
+        (altitudeReference.value === 'agl'
+          ? '; route and leg altitudes AGL (above the departure field), others MSL'
+          : '; altitudes MSL'),
     ),
     locale,
     numberStyle: style,

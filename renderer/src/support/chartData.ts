@@ -95,7 +95,8 @@ export function profileChart(
   }
   return {
     xTitle: axis === 'distance' ? `Ground distance (${label('distance', system)})` : 'Time (min)',
-    yTitle: `Altitude (${label('altitude', system)})`,
+    // The profile is drawn above mean sea level whatever the boxes show (heightReference.ts).
+    yTitle: `Altitude (${label('altitude', system)} MSL)`,
     y2Title: battery ? 'State of charge (%)' : `Fuel (${label('fuelMass', system)})`,
     ...(battery ? { y2Max: 100 } : {}),
     series,
