@@ -304,10 +304,12 @@ export function missionSections(plan: Plan): FieldSection[] {
       title: 'Reserve policy',
       fields: [
         num('reserves.holdTime_s', 'Final reserve hold', 'time', 's'),
-        num('reserves.holdAltitude_m', 'Hold altitude', 'altitude', 'm'),
+        num('reserves.holdAltitude_m', 'Hold altitude', 'altitude', 'm', { datum: 'msl' }),
         num('reserves.contingencyFraction', 'Contingency (of trip)', 'ratio', 'fraction'),
         num('reserves.alternateDistance_m', 'Alternate distance', 'distance', 'm'),
-        num('reserves.alternateAltitude_m', 'Alternate altitude', 'altitude', 'm'),
+        num('reserves.alternateAltitude_m', 'Alternate altitude', 'altitude', 'm', {
+          datum: 'msl',
+        }),
         ...(electric
           ? [num('reserves.socFloor', 'Battery floor (state of charge)', 'ratio', 'fraction')]
           : []),
