@@ -92,6 +92,23 @@ export async function openPlanner(
   };
 }
 
+/**
+ * The planner page ready for a test: built, served and opened, its uncaught errors collected
+ * into `pageErrors`, the first result on screen. Under CI a missing Chromium is an error.
+ */
+export async function openPlannerPage(
+  options: { width?: number; height?: number; outDir?: string },
+  pageErrors: string[],
+): Promise<PlannerPage> {
+  if (!haveChromium)
+    throw new Error('CI is set but /usr/bin/chromium is missing: the browser tests cannot run.');
+  const planner = await openPlanner(options);
+  planner.page.on('pageerror', (e) => pageErrors.push(String(e)));
+  await planner.page.goto(planner.url);
+  await planner.page.waitForSelector('[data-testid="total-time"]');
+  return planner;
+}
+
 /** Inputs, selects, text areas and buttons with no label a screen reader could read (outerHTML). */
 export async function unlabelledControls(page: Page): Promise<string[]> {
   return page.evaluate(() =>

@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { examplePlan } from '../renderer/fixtures.ts';
 import { SHORTCUTS, keyLabel } from '../../electron/shortcutList.ts';
-import { haveChromium, openPlanner, type PlannerPage } from './harness.ts';
+import { haveChromium, openPlannerPage, type PlannerPage } from './harness.ts';
 
 const byTestId = (id: string) => `[data-testid="${id}"]`;
 
@@ -20,13 +20,11 @@ describe.runIf(haveChromium || !!process.env.CI)('plan notes in the planner', ()
   const pageErrors: string[] = [];
 
   beforeAll(async () => {
-    if (!haveChromium)
-      throw new Error('CI is set but /usr/bin/chromium is missing: the browser tests cannot run.');
-    planner = await openPlanner({ width: 1280, height: 800, outDir: 'artifacts/page-notes' });
+    planner = await openPlannerPage(
+      { width: 1280, height: 800, outDir: 'artifacts/page-notes' },
+      pageErrors,
+    );
     page = planner.page;
-    page.on('pageerror', (e) => pageErrors.push(String(e)));
-    await page.goto(planner.url);
-    await page.waitForSelector(byTestId('total-time'));
   });
 
   afterAll(async () => {

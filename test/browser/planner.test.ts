@@ -18,7 +18,7 @@ import { bestSpeedForLeg } from '../../core/optimize/speedSweep.ts';
 import type { UnitSystemId } from '../../core/units.ts';
 import { SAMPLES_PER_LEG } from '../../renderer/src/composables/useResult.ts';
 import { examplePlan } from '../renderer/fixtures.ts';
-import { haveChromium, openPlanner, unlabelledControls, type PlannerPage } from './harness.ts';
+import { haveChromium, openPlannerPage, unlabelledControls, type PlannerPage } from './harness.ts';
 
 const SHOTS = new URL('../../artifacts/screenshots/', import.meta.url);
 
@@ -97,14 +97,9 @@ describe.runIf(haveChromium || !!process.env.CI)('planner page in headless Chrom
   const demo = examplePlan('twelve-legs');
 
   beforeAll(async () => {
-    if (!haveChromium)
-      throw new Error('CI is set but /usr/bin/chromium is missing: the browser tests cannot run.');
     mkdirSync(SHOTS, { recursive: true });
-    planner = await openPlanner({ width: 1280, height: 800 });
+    planner = await openPlannerPage({ width: 1280, height: 800 }, pageErrors);
     page = planner.page;
-    page.on('pageerror', (e) => pageErrors.push(String(e)));
-    await page.goto(planner.url);
-    await page.waitForSelector(byTestId('total-time'));
   });
 
   afterAll(async () => {

@@ -21,7 +21,7 @@ import { allFields } from '../../renderer/src/composables/usePlan.ts';
 import type { NumberFieldDef } from '../../renderer/src/support/fieldTypes.ts';
 import { getAtPath } from '../../renderer/src/support/paths.ts';
 import { examplePlan } from '../renderer/fixtures.ts';
-import { haveChromium, openPlanner, type PlannerPage } from './harness.ts';
+import { haveChromium, openPlannerPage, type PlannerPage } from './harness.ts';
 
 const SEED = Number(process.env.TYPING_SEED ?? Date.now() % 2_147_483_647);
 const KEY_DELAY_MS = 60;
@@ -206,16 +206,14 @@ describe.runIf(haveChromium || !!process.env.CI)('typing key by key (issue 11)',
   const pageErrors: string[] = [];
 
   beforeAll(async () => {
-    if (!haveChromium)
-      throw new Error('CI is set but /usr/bin/chromium is missing: the browser tests cannot run.');
     console.info(
       `test/browser/typing.test.ts: fast-check seed ${SEED} (TYPING_SEED=${SEED} reruns it)`,
     );
-    planner = await openPlanner({ width: 1366, height: 900, outDir: 'artifacts/page-typing' });
+    planner = await openPlannerPage(
+      { width: 1366, height: 900, outDir: 'artifacts/page-typing' },
+      pageErrors,
+    );
     page = planner.page;
-    page.on('pageerror', (e) => pageErrors.push(String(e)));
-    await page.goto(planner.url);
-    await page.waitForSelector(byTestId('total-time'));
   });
 
   afterAll(async () => {
