@@ -6,11 +6,8 @@ import type { Plan } from '../../../core/plan/schema.ts';
 import { solvePlan } from '../../../core/solver/solve.ts';
 import { reserveMonteCarlo } from '../../../core/uncertainty/reserveMonteCarlo.ts';
 import { normalSource } from '../../../core/uncertainty/random.ts';
-import {
-  perturbPlan,
-  spreadsFromDefaults,
-  type ReserveSpreads,
-} from '../../../core/uncertainty/spreads.ts';
+import { perturbPlan, spreadsFromDefaults } from '../../../core/uncertainty/spreads.ts';
+import { ZERO_SPREADS } from './fixtures.ts';
 
 function example(name: string): Plan {
   const r = parsePlanText(
@@ -21,15 +18,7 @@ function example(name: string): Plan {
 }
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
-const zero: ReserveSpreads = {
-  windSpeed_m_s: 0,
-  windDirection_deg: 0,
-  cd0: 0,
-  efficiency: 0,
-  fuelConsumption: 0,
-  batteryCapacity: 0,
-  payload_kg: 0,
-};
+const zero = ZERO_SPREADS;
 
 describe('reserveMonteCarlo', () => {
   const uav = example('survey-uav-electric');

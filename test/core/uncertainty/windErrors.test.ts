@@ -15,16 +15,9 @@ import { reserveMonteCarlo } from '../../../core/uncertainty/reserveMonteCarlo.t
 import { perturbPlan, type ReserveSpreads } from '../../../core/uncertainty/spreads.ts';
 import { pearson } from '../../../core/uncertainty/stats.ts';
 import { cruise, loiter, makePlan, rel } from '../solver/fixtures.ts';
+import { ZERO_SPREADS } from './fixtures.ts';
 
-const zero: ReserveSpreads = {
-  windSpeed_m_s: 0,
-  windDirection_deg: 0,
-  cd0: 0,
-  efficiency: 0,
-  fuelConsumption: 0,
-  batteryCapacity: 0,
-  payload_kg: 0,
-};
+const zero = ZERO_SPREADS;
 
 /** Three cruise legs in a 30 m/s wind (far from the censoring at 0 with σ 3 m/s). */
 function threeLegs(): Plan {
